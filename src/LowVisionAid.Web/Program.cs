@@ -1,0 +1,22 @@
+var builder = WebApplication.CreateBuilder(args);
+
+// Listen on loopback only unless configured otherwise: the app holds health information.
+if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(builder.Configuration["ASPNETCORE_URLS"]))
+{
+    builder.WebHost.UseUrls("http://127.0.0.1:5080");
+}
+
+builder.Services.AddRazorPages();
+
+var app = builder.Build();
+
+if (!app.Environment.IsDevelopment())
+{
+    app.UseExceptionHandler("/Error");
+}
+
+app.UseStaticFiles();
+app.UseRouting();
+app.MapRazorPages();
+
+await app.RunAsync().ConfigureAwait(false);
