@@ -123,10 +123,12 @@ public static class Ranking
             }
         }
 
-        // Tiers per option and rule: 0 is best. The last rule uses the working-distance ratio itself.
-        var tiers = new int[n * RuleCount];
-        var mismatch = new double[n];
-        var order = new int[n];
+        // Tiers per option and rule: 0 is best. Ties after every rule are broken by the working-distance ratio itself.
+        // Implementation note: scratch space lives on the stack for the usual short lists, so ranking allocates only its result.
+        const int StackLimit = 64;
+        Span<int> tiers = n <= StackLimit ? stackalloc int[n * RuleCount] : new int[n * RuleCount];
+        Span<double> mismatch = n <= StackLimit ? stackalloc double[n] : new double[n];
+        Span<int> order = n <= StackLimit ? stackalloc int[n] : new int[n];
         var preferred = request.PreferredDistance.Abs().Metres;
         for (var i = 0; i < n; i++)
         {
@@ -169,7 +171,7 @@ public static class Ranking
         return ImmutableCollectionsMarshal.AsImmutableArray(ranked);
     }
 
-    private static int Compare(int a, int b, int[] tiers, double[] mismatch, int activeCount)
+    private static int Compare(int a, int b, ReadOnlySpan<int> tiers, ReadOnlySpan<double> mismatch, int activeCount)
     {
         for (var r = 0; r < activeCount; r++)
         {

@@ -19,81 +19,83 @@ public static class Planner
     public static ImmutableArray<string> Check(PlanRequest request)
     {
         ArgumentNullException.ThrowIfNull(request);
-        var problems = ImmutableArray.CreateBuilder<string>();
+        // Implementation note: the builder is made only when there is a problem, so a valid request allocates nothing here.
+        ImmutableArray<string>.Builder? problems = null;
+        void Add(string message) => (problems ??= ImmutableArray.CreateBuilder<string>()).Add(message);
         if (!request.TargetPrint.IsValid)
         {
-            problems.Add("Enter the target print size in M units, e.g. 1.0 for newsprint.");
+            Add("Enter the target print size in M units, e.g. 1.0 for newsprint.");
         }
 
         if (!(request.PreferredDistance.Metres > 0))
         {
-            problems.Add("Enter the preferred working distance, greater than zero, e.g. 40 cm.");
+            Add("Enter the preferred working distance, greater than zero, e.g. 40 cm.");
         }
 
         if (!Enum.IsDefined(request.Task))
         {
-            problems.Add("Choose the task: spot reading, sustained reading, writing, a screen or distance viewing.");
+            Add("Choose the task: spot reading, sustained reading, writing, a screen or distance viewing.");
         }
 
         if (request.Task == ReadingTask.DistanceViewing)
         {
             if (request.DistanceAcuity is null || request.GoalDistanceAcuity is null)
             {
-                problems.Add("For distance viewing enter the current distance acuity and the goal acuity, e.g. 6/60 and 6/12.");
+                Add("For distance viewing enter the current distance acuity and the goal acuity, e.g. 6/60 and 6/12.");
             }
             else if (!(request.DistanceAcuity.Value.MarArcminutes > request.GoalDistanceAcuity.Value.MarArcminutes))
             {
-                problems.Add("The goal acuity must be better than the current acuity; no magnification is needed otherwise.");
+                Add("The goal acuity must be better than the current acuity; no magnification is needed otherwise.");
             }
         }
         else if (request.RequiredPower is not { } required || !(required.Dioptres > 0))
         {
-            problems.Add("Enter the required equivalent power in dioptres, greater than zero, e.g. 10.");
+            Add("Enter the required equivalent power in dioptres, greater than zero, e.g. 10.");
         }
 
         var c = request.Constraints;
         if (c.UsefulEyes is not (1 or 2))
         {
-            problems.Add("Enter 1 or 2 useful eyes.");
+            Add("Enter 1 or 2 useful eyes.");
         }
 
         if (c.UsableAccommodation is { } acc && acc.Dioptres < 0)
         {
-            problems.Add("Usable accommodation cannot be negative; enter 0 if the client has none.");
+            Add("Usable accommodation cannot be negative; enter 0 if the client has none.");
         }
 
         if (c.AgeYears is { } age && age is < 0 or > 120)
         {
-            problems.Add("Enter an age between 0 and 120 years.");
+            Add("Enter an age between 0 and 120 years.");
         }
 
         if (c.LogContrastSensitivity is { } cs && !(cs is >= 0 and <= 2.5))
         {
-            problems.Add("Enter contrast sensitivity in logCS between 0.00 and 2.50, e.g. 1.05.");
+            Add("Enter contrast sensitivity in logCS between 0.00 and 2.50, e.g. 1.05.");
         }
 
         if (!(c.InterpupillaryDistance.Millimetres is >= 40 and <= 80))
         {
-            problems.Add("Enter the interpupillary distance between 40 and 80 mm, e.g. 64.");
+            Add("Enter the interpupillary distance between 40 and 80 mm, e.g. 64.");
         }
 
         var s = request.Settings;
         if (!(s.CharacterPitch is >= 0.5 and <= 2.0))
         {
-            problems.Add("The character pitch k must be between 0.5 and 2.0 times the x-height; 1.1 suits most book faces.");
+            Add("The character pitch k must be between 0.5 and 2.0 times the x-height; 1.1 suits most book faces.");
         }
 
         if (!(s.BlurTolerance.Dioptres is > 0 and <= 3))
         {
-            problems.Add("The blur tolerance for depth of field must be between 0 and 3 D, e.g. 0.59.");
+            Add("The blur tolerance for depth of field must be between 0 and 3 D, e.g. 0.59.");
         }
 
         if (!(s.PowerTolerance is > 0.5 and <= 1.0))
         {
-            problems.Add("The power tolerance must be a fraction between 0.5 and 1, e.g. 0.955.");
+            Add("The power tolerance must be a fraction between 0.5 and 1, e.g. 0.955.");
         }
 
-        return problems.ToImmutable();
+        return problems?.ToImmutable() ?? [];
     }
 
     /// <summary>Builds the plan for a request.</summary>
@@ -110,8 +112,8 @@ public static class Planner
         var distanceTask = request.Task == ReadingTask.DistanceViewing;
         var effective = distanceTask ? WithDistanceRequirement(request) : request;
         var context = new OptionContext(effective);
-        var options = new List<MagnifierOption>(8);
-        var notConsidered = new List<NotConsidered>(6);
+        var options = new List<MagnifierOption>(distanceTask ? 2 : 7);
+        var notConsidered = new List<NotConsidered>(distanceTask ? 6 : 2);
         options.Add(MovingCloserOption.Create(context, distanceTask));
         if (distanceTask)
         {
@@ -173,9 +175,6 @@ public static class Planner
 
     private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> kit)
     {
-        var cautions = new Caution[10];
-        var n = 0;
-        cautions[n++] = Caution.StartingPoint;
         var anyLens = false;
         var anyStrong = false;
         var anyShort = false;
@@ -193,6 +192,14 @@ public static class Planner
             anyPowered |= k.Option is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
         }
 
+        var distance = request.Task == ReadingTask.DistanceViewing;
+        var contrast = request.Constraints.LogContrastSensitivity is { } cs && cs < Ranking.LowContrast
+            ? (cs < Ranking.VeryLowContrast ? Caution.VideoOrNonVisual : Caution.LightingAssessment)
+            : null;
+        var count = 3 + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
+        var cautions = new Caution[count];
+        var n = 0;
+        cautions[n++] = Caution.StartingPoint;
         if (anyLens)
         {
             cautions[n++] = Caution.SunlightFire;
@@ -204,7 +211,7 @@ public static class Planner
             cautions[n++] = Caution.NoWalking;
         }
 
-        if (request.Task == ReadingTask.DistanceViewing)
+        if (distance)
         {
             cautions[n++] = Caution.Driving;
         }
@@ -214,9 +221,9 @@ public static class Planner
             cautions[n++] = Caution.ShortSessions;
         }
 
-        if (request.Constraints.LogContrastSensitivity is { } cs && cs < Ranking.LowContrast)
+        if (contrast is not null)
         {
-            cautions[n++] = cs < Ranking.VeryLowContrast ? Caution.VideoOrNonVisual : Caution.LightingAssessment;
+            cautions[n++] = contrast;
         }
 
         if (anyPowered)
@@ -224,7 +231,7 @@ public static class Planner
             cautions[n++] = Caution.ChargeDevices;
         }
 
-        cautions[n++] = Caution.Referral;
-        return ImmutableCollectionsMarshal.AsImmutableArray(cautions.AsSpan(0, n).ToArray());
+        cautions[n] = Caution.Referral;
+        return ImmutableCollectionsMarshal.AsImmutableArray(cautions);
     }
 }
