@@ -124,4 +124,45 @@ public static class ParseMessages
         _ =>
             "No light perception is recorded; there is no vision for magnification to help. Plan with the practitioner, for example for non-visual aids.",
     };
+
+    // ---- Print size -------------------------------------------------------------------------------------------
+
+    /// <summary>Empty or unreadable print size: the accepted forms.</summary>
+    public const string PrintSizeExpected =
+        "Type a print size such as 1M, 1.0 M, N8, 12 pt or 1.5 mm (x-height).";
+
+    /// <summary>A print size typed without a unit.</summary>
+    public static string PrintSizeNeedsUnit(string number) =>
+        $"“{number}” needs a unit: type it as {number}M, N{number}, {number} pt or {number} mm (x-height).";
+
+    /// <summary>A print size outside 0.05M to 100M.</summary>
+    public const string PrintSizeOutOfRange =
+        "A print size must be between 0.05M and 100M (x-height 0.07 mm to 145 mm), such as 1M.";
+
+    /// <summary>Warning: a point or N size was converted to M through an x-height ratio.</summary>
+    public static string ApproximateFromPoints(string typed, string m, string ratio) =>
+        $"{typed} is about {m}: a point size measures the font body, not the letters, so this assumes an x-height of {ratio} of the point size. The real size depends on the typeface; measure the x-height in mm for an exact size.";
+
+    /// <summary>A Jaeger label that is not on the table the tool uses.</summary>
+    public static string JaegerNotInTable(string label, string labels) =>
+        $"{label} is not on the Jaeger table the tool uses ({labels}). Jaeger sizes differ between cards: type the M size printed on the card instead, such as 1M at 40 cm.";
+
+    /// <summary>Warning shown with every Jaeger value: approximate and card-dependent.</summary>
+    public static string JaegerApproximate(string label, string m, string snellen, bool assumedDistance) =>
+        $"{label} is approximate: Jaeger numbers differ from card to card, by one or two lines. It was read as about {m} ({snellen} at 40 cm on a typical card). Check the M size printed on the card and confirm before using it."
+        + (assumedDistance ? " No distance was given, so 40 cm was assumed." : string.Empty);
+
+    // ---- Near acuity ------------------------------------------------------------------------------------------
+
+    /// <summary>Empty or unreadable near acuity: the accepted forms.</summary>
+    public const string NearAcuityExpected =
+        "Type the smallest print read and the distance, such as 1M at 40 cm, 1.6M @ 25cm, N8 at 25 cm, 20/50 at 40 cm or 0.40/1.0M.";
+
+    /// <summary>A near print size or near Snellen value typed without its distance.</summary>
+    public static string NearNeedsDistance(string typed) =>
+        $"Add the distance the print was read at, such as {typed} at 40 cm.";
+
+    /// <summary>A near measurement whose equivalent acuity falls outside logMAR −0.5 to 3.0.</summary>
+    public const string NearAcuityOutOfRange =
+        "That print size and distance give an acuity outside logMAR -0.5 to 3.0. Check both, as in 1M at 40 cm.";
 }
