@@ -78,7 +78,7 @@ public static partial class DistanceAcuityNotation
                 return ParseResult.Fail<Acuity>(topError!);
             }
 
-            var letters = match.Groups["n"].Value.Length > 4 ? int.MaxValue : int.Parse(match.Groups["n"].Value, provider);
+            var letters = match.Groups["n"].Value.Length > 4 ? int.MaxValue : int.Parse(match.Groups["n"].Value, System.Globalization.CultureInfo.InvariantCulture);
             return FromLetterScore(top, letters, options.LettersPerLine);
         }
 
@@ -92,7 +92,10 @@ public static partial class DistanceAcuityNotation
             : ParseMessages.DistanceAcuityExpected);
     }
 
-    /// <summary>Parses with the default options; false when the text is not a distance acuity.</summary>
+    /// <summary>
+    /// Parses with the default options; false when the text is not a distance acuity. The default options never
+    /// produce a warning (bare numbers are refused), so nothing is dropped.
+    /// </summary>
     public static bool TryParse(string? text, IFormatProvider? provider, out Acuity acuity) =>
         Parse(text, provider).TryGetValue(out acuity);
 
@@ -183,7 +186,7 @@ public static partial class DistanceAcuityNotation
     {
         // "6,60" or "20,200" is a fraction typed with a comma, not a decimal: say so rather than guess.
         var comma = token.IndexOf(',', StringComparison.Ordinal);
-        if (comma > 0 && int.TryParse(token.AsSpan(0, Math.Min(comma, 6)), System.Globalization.NumberStyles.AllowLeadingSign, provider, out var whole) && whole >= 4)
+        if (comma > 0 && int.TryParse(token.AsSpan(0, Math.Min(comma, 6)), System.Globalization.NumberStyles.AllowLeadingSign, System.Globalization.CultureInfo.InvariantCulture, out var whole) && whole >= 4)
         {
             return ParseResult.Fail<Acuity>(ParseMessages.BareNumberNotAnAcuity(token));
         }

@@ -89,9 +89,16 @@ public static partial class NearAcuityNotation
         return ParseResult.Fail<NearAcuity>(ParseMessages.NearAcuityExpected);
     }
 
-    /// <summary>Parses a near acuity; false when the text is not one. Warnings are dropped: prefer <see cref="Parse"/> in the app.</summary>
-    public static bool TryParse(string? text, IFormatProvider? provider, out NearAcuity nearAcuity) =>
-        Parse(text, provider).TryGetValue(out nearAcuity);
+    /// <summary>
+    /// Parses a near acuity with the conventional x-height ratio; false when the text is not one.
+    /// <paramref name="warning"/> is the caution to show beside the value (N, points, Jaeger), or null.
+    /// </summary>
+    public static bool TryParse(string? text, IFormatProvider? provider, out NearAcuity nearAcuity, out string? warning)
+    {
+        var result = Parse(text, provider);
+        warning = result.Warning;
+        return result.TryGetValue(out nearAcuity);
+    }
 
     /// <summary>Checks a measurement entered as numbers, with the same messages as <see cref="Parse"/>.</summary>
     public static ParseResult<NearAcuity> FromMeasurement(PrintSize threshold, Distance testDistance)

@@ -44,9 +44,16 @@ public static partial class PrintSizeNotation
         return normalised is null ? ParseResult.Fail<PrintSize>(error!) : ParseNormalised(normalised, provider, xHeightRatio);
     }
 
-    /// <summary>Parses a print size; false when the text is not one. Warnings are dropped: prefer <see cref="Parse"/> in the app.</summary>
-    public static bool TryParse(string? text, IFormatProvider? provider, out PrintSize printSize) =>
-        Parse(text, provider).TryGetValue(out printSize);
+    /// <summary>
+    /// Parses a print size with the conventional x-height ratio; false when the text is not one.
+    /// <paramref name="warning"/> is the caution to show beside the value (N, points, Jaeger), or null.
+    /// </summary>
+    public static bool TryParse(string? text, IFormatProvider? provider, out PrintSize printSize, out string? warning)
+    {
+        var result = Parse(text, provider);
+        warning = result.Warning;
+        return result.TryGetValue(out printSize);
+    }
 
     /// <summary>
     /// Writes a print size for display: "1.0M", "N8.3", "8.3 pt" or "1.45 mm". N and points go through

@@ -151,8 +151,11 @@ public class NearAcuityNotationTests
     [Fact]
     public void TryParse_gives_the_value_or_false()
     {
-        Assert.True(NearAcuityNotation.TryParse("4M at 40 cm", Invariant, out var near));
+        Assert.True(NearAcuityNotation.TryParse("4M at 40 cm", Invariant, out var near, out var none));
         Tolerance.Within(4.0, near.Threshold.M, 1e-12);
-        Assert.False(NearAcuityNotation.TryParse("4M", Invariant, out _));
+        Assert.Null(none);
+        Assert.False(NearAcuityNotation.TryParse("4M", Invariant, out _, out _));
+        Assert.True(NearAcuityNotation.TryParse("J5", Invariant, out _, out var jaeger));
+        Assert.Equal(ParseMessages.JaegerApproximate("J5", "1.0M", "20/50", assumedDistance: true), jaeger);
     }
 }

@@ -93,8 +93,18 @@ public class PrintSizeNotationTests
     [Fact]
     public void TryParse_gives_the_value_or_false()
     {
-        Assert.True(PrintSizeNotation.TryParse("1M", Invariant, out var size));
+        Assert.True(PrintSizeNotation.TryParse("1M", Invariant, out var size, out var none));
         Tolerance.Within(1.0, size.M, 1e-12);
-        Assert.False(PrintSizeNotation.TryParse("1", Invariant, out _));
+        Assert.Null(none);
+        Assert.False(PrintSizeNotation.TryParse("1", Invariant, out _, out _));
+    }
+
+    [Fact]
+    public void TryParse_hands_back_the_warning_so_an_approximate_size_is_never_silent()
+    {
+        Assert.True(PrintSizeNotation.TryParse("J5", Invariant, out _, out var jaeger));
+        Assert.Equal(ParseMessages.JaegerApproximate("J5", "1.0M", "20/50", assumedDistance: false), jaeger);
+        Assert.True(PrintSizeNotation.TryParse("12 pt", Invariant, out _, out var points));
+        Assert.Equal(ParseMessages.ApproximateFromPoints("12 pt", "1.5M", "0.50"), points);
     }
 }
