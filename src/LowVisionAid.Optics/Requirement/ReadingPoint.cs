@@ -19,6 +19,14 @@ public readonly record struct ReadingPoint
                 "Enter the reading speed in words per minute, zero or more, such as 85.");
     }
 
+    /// <summary>
+    /// A point from one timed chart sentence: speed = 60 × (10 − errors) / t (MNREAD manual; with 0 errors this is
+    /// 600 / t).
+    /// </summary>
+    /// <exception cref="ArgumentOutOfRangeException">The print size, time or error count is out of range.</exception>
+    public static ReadingPoint FromTimedSentence(PrintSize printSize, double seconds, int wordErrors) =>
+        new(printSize, ReadingTestScoring.WordsPerMinute(wordErrors, seconds));
+
     /// <summary>The print size of the sentence (x-height in M units).</summary>
     public PrintSize PrintSize { get; }
 

@@ -127,6 +127,14 @@ public class ReadingCurveTests
     }
 
     [Fact]
+    public void A_timed_sentence_becomes_a_point_at_the_error_corrected_speed()
+    {
+        // CV-26: MNREAD, 2 errors in 5.0 s → 96 wpm; 0 errors in 4.0 s → 150 wpm. Exact (±1e-9).
+        Tolerance.Within(96.0, ReadingPoint.FromTimedSentence(PrintSize.FromM(2), 5.0, 2).WordsPerMinute, 1e-9);
+        Tolerance.Within(150.0, ReadingPoint.FromTimedSentence(PrintSize.FromM(2), 4.0, 0).WordsPerMinute, 1e-9);
+    }
+
+    [Fact]
     public void A_negative_speed_is_refused_with_an_example()
     {
         var error = Assert.Throws<ArgumentOutOfRangeException>(() => new ReadingPoint(PrintSize.FromM(1), -5));
