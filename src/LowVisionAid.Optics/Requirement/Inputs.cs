@@ -33,11 +33,5 @@ internal static class Inputs
             : throw new ArgumentOutOfRangeException(paramName, size.M,
                 $"Enter the {what} as a print size greater than zero, such as 1.0M.");
 
-    public static double Ratio(double value, string paramName, string what, string example) =>
-        double.IsFinite(value) && value > 0
-            ? value
-            : throw new ArgumentOutOfRangeException(paramName, value,
-                $"Enter the {what} as a number greater than zero, such as {example}.");
-
     public static string Number(double value, string format) => value.ToString(format, CultureInfo.InvariantCulture);
 }
