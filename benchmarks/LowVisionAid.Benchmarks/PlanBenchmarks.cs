@@ -48,9 +48,24 @@ public class PlanBenchmarks
         Kit = Kit,
     };
 
+    private readonly PlanRequest _estimated = new()
+    {
+        TargetPrint = PrintSize.FromM(1),
+        PreferredDistance = Distance.FromCentimetres(40),
+        Task = ReadingTask.SustainedReading,
+        DistanceAcuity = Acuity.FromSnellen(6, 60),
+        Estimates = new EstimateInputs { NearThresholdPrint = PrintSize.FromM(4), NearTestDistance = Distance.FromCentimetres(40) },
+        Constraints = new ClientConstraints { AgeYears = 74, AddWorn = Power.FromDioptres(2.5), LogContrastSensitivity = 0.9, Tremor = true },
+        Kit = Kit,
+    };
+
     /// <summary>A near plan: seven classes, ranking, ten-device kit matching, cautions.</summary>
     [Benchmark(Baseline = true)]
     public PlanResult NearPlanWithTenDeviceKit() => Planner.Build(_near);
+
+    /// <summary>The same near plan with its required power taken from three estimates compared side by side.</summary>
+    [Benchmark]
+    public PlanResult NearPlanFromEstimates() => Planner.Build(_estimated);
 
     /// <summary>A distance plan: moving closer and the distance telescope, ranking, the same kit.</summary>
     [Benchmark]

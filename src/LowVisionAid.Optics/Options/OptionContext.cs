@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Accommodation;
 using LowVisionAid.Optics.Devices;
 using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
@@ -18,8 +19,24 @@ public sealed class OptionContext
         Constraints = request.Constraints;
         Required = request.RequiredPower?.Dioptres ?? throw new ArgumentException("The request has no required equivalent power; enter it in dioptres, e.g. 10.", nameof(request));
         Preferred = request.PreferredDistance.Abs().Metres;
-        UsableAccommodation = Math.Max(0, Accommodation.UsableFor(request.Constraints).Dioptres);
-        MyopicBuiltInAdd = Math.Max(0, -request.Constraints.DistanceRefraction.Dioptres);
+        var constraints = request.Constraints;
+        var myopia = Power.FromDioptres(Math.Min(0, constraints.DistanceRefraction.Dioptres));
+        // Usable accommodation: as measured, else estimated from age by Hofstetter's minimum with half kept in reserve
+        // (methods §10.1; the Accommodation module); a myope of −K D has a built-in add of +K (methods §3.2).
+        if (constraints.UsableAccommodation is { } usable)
+        {
+            UsableAccommodation = Math.Max(0, usable.Dioptres);
+            MyopicBuiltInAdd = -myopia.Dioptres;
+        }
+        else
+        {
+            var profile = constraints.AgeYears is { } age
+                ? AccommodationProfile.FromAge(age, uncorrectedMyopia: myopia)
+                : AccommodationProfile.None;
+            UsableAccommodation = profile.UsableSustained.Dioptres;
+            MyopicBuiltInAdd = constraints.AgeYears is null ? -myopia.Dioptres : profile.BuiltInAddFromMyopia.Dioptres;
+            AccommodationEstimated = constraints.AgeYears is not null;
+        }
         TwoEyes = request.Constraints.UsefulEyes >= 2;
         Add = request.Constraints.AddWorn is { } worn && worn.Dioptres > 0 ? worn.Dioptres : Settings.TypicalReadingAdd.Dioptres;
     }
@@ -44,6 +61,9 @@ public sealed class OptionContext
 
     /// <summary>The built-in add of an uncorrected myope, +K for −K D (methods §2.7, §3.1).</summary>
     public double MyopicBuiltInAdd { get; }
+
+    /// <summary>True when the usable accommodation was estimated from age rather than measured.</summary>
+    public bool AccommodationEstimated { get; }
 
     /// <summary>True with two useful eyes.</summary>
     public bool TwoEyes { get; }

@@ -45,6 +45,12 @@ public sealed class Caution
     /// <summary>When to seek prompt care.</summary>
     public static Caution Referral { get; } = new("referral", "See an eye-care practitioner promptly for any sudden change or loss of vision, new distortion or blank patch, flashes, floaters, a painful red eye or new double vision.");
 
+    /// <summary>Accommodation estimated from age.</summary>
+    public static Caution AccommodationEstimated { get; } = new("accommodation-estimated", "The client's focusing (accommodation) was estimated from age, which varies widely between people: measure it if the plan relies on it.");
+
+    /// <summary>Required-power estimates disagree.</summary>
+    public static Caution EstimatesDisagree { get; } = new("estimates-disagree", "The required-power estimates disagree by more than 0.2 log units: look at the possible reasons, and let a trial with the client's own reading material decide.");
+
     /// <inheritdoc/>
     public override string ToString() => Text;
 }

@@ -11,10 +11,14 @@ namespace LowVisionAid.Optics.Planning;
 public sealed record PlanRequest
 {
     /// <summary>
-    /// The required equivalent power for the near task (from the required-power estimates). Needed for every task
-    /// except <see cref="ReadingTask.DistanceViewing"/>, whose requirement comes from the distance acuities.
+    /// The required equivalent power for the near task, as the practitioner decided it. When null, the plan uses the
+    /// estimate from <see cref="Estimates"/> (reading curve, else near acuity, else Kestenbaum with reserve).
+    /// Not used for <see cref="ReadingTask.DistanceViewing"/>, whose requirement comes from the distance acuities.
     /// </summary>
     public Power? RequiredPower { get; init; }
+
+    /// <summary>The measurements for the required-power estimates, shown side by side in the result. Default: none.</summary>
+    public EstimateInputs Estimates { get; init; } = EstimateInputs.None;
 
     /// <summary>The print the client wants to read (x-height in M units).</summary>
     public required PrintSize TargetPrint { get; init; }
@@ -28,7 +32,7 @@ public sealed record PlanRequest
     /// <summary>The client's constraints. Default: <see cref="ClientConstraints.None"/>.</summary>
     public ClientConstraints Constraints { get; init; } = ClientConstraints.None;
 
-    /// <summary>Current distance acuity (needed for distance viewing; optional otherwise).</summary>
+    /// <summary>Current distance acuity (needed for distance viewing; for near tasks it gives the Kestenbaum estimates).</summary>
     public Acuity? DistanceAcuity { get; init; }
 
     /// <summary>Goal distance acuity for the distance task (e.g. 6/12 for television).</summary>

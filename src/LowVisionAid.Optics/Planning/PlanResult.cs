@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Requirement;
 
 namespace LowVisionAid.Optics.Planning;
 
@@ -19,6 +20,21 @@ public sealed record PlanResult
 
     /// <summary>The request the plan was built from.</summary>
     public required PlanRequest Request { get; init; }
+
+    /// <summary>The required equivalent power the options were built for.</summary>
+    public required Quantities.Power RequiredPower { get; init; }
+
+    /// <summary>The estimate the required power was taken from, or null when the practitioner entered it (or for distance viewing).</summary>
+    public PowerMethod? RequiredPowerFrom { get; init; }
+
+    /// <summary>
+    /// Every required-power estimate the inputs allowed, side by side, with the pairs that disagree by more than
+    /// 0.2 log units (<see cref="EstimateComparison.HasDisagreement"/>); null when no estimate inputs were given.
+    /// </summary>
+    public EstimateComparison? Estimates { get; init; }
+
+    /// <summary>The reading-curve analysis when reading points were given (its Refusal says why a curve could not be used).</summary>
+    public ReadingCurveAnalysis? ReadingCurve { get; init; }
 
     /// <summary>The options, first choice first.</summary>
     public required ImmutableArray<RankedOption> Options { get; init; }

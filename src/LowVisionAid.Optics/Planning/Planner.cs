@@ -3,6 +3,7 @@ using System.Runtime.InteropServices;
 using LowVisionAid.Optics.Kit;
 using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
+using LowVisionAid.Optics.Requirement;
 
 namespace LowVisionAid.Optics.Planning;
 
@@ -48,9 +49,27 @@ public static class Planner
                 Add("The goal acuity must be better than the current acuity; no magnification is needed otherwise.");
             }
         }
-        else if (request.RequiredPower is not { } required || !(required.Dioptres > 0))
+        else if (request.RequiredPower is { } required)
         {
-            Add("Enter the required equivalent power in dioptres, greater than zero, e.g. 10.");
+            if (!(required.Dioptres > 0))
+            {
+                Add("Enter the required equivalent power in dioptres, greater than zero, e.g. 10.");
+            }
+        }
+        else if (!(request.Estimates ?? EstimateInputs.None).CanEstimate(request.DistanceAcuity))
+        {
+            Add("Enter the required equivalent power in dioptres (e.g. 10), or the measurements for an estimate: the distance acuity, the near threshold print with its test distance, or a reading curve with its test distance.");
+        }
+
+        var e = request.Estimates ?? EstimateInputs.None;
+        if ((e.NearTestDistance is { } nd && !(nd.Metres > 0)) || (e.ReadingTestDistance is { } rd && !(rd.Metres > 0)))
+        {
+            Add("Enter test distances greater than zero, e.g. 40 cm.");
+        }
+
+        if ((e.NearThresholdPrint is { } np && !np.IsValid) || (e.CriticalPrintSize is { } cp && !cp.IsValid))
+        {
+            Add("Enter print sizes greater than zero, e.g. 1.0M.");
         }
 
         var c = request.Constraints;
@@ -62,6 +81,11 @@ public static class Planner
         if (c.UsableAccommodation is { } acc && acc.Dioptres < 0)
         {
             Add("Usable accommodation cannot be negative; enter 0 if the client has none.");
+        }
+
+        if (!(c.DistanceRefraction.Dioptres is >= -30 and <= 30))
+        {
+            Add("Enter the distance refraction as a spherical equivalent between -30 and +30 D, e.g. -3.00.");
         }
 
         if (c.AgeYears is { } age && age is < 0 or > 120)
@@ -109,8 +133,27 @@ public static class Planner
             throw new ArgumentException(string.Join(" ", problems), nameof(request));
         }
 
+
         var distanceTask = request.Task == ReadingTask.DistanceViewing;
-        var effective = distanceTask ? WithDistanceRequirement(request) : request;
+        EstimateComparison? comparison = null;
+        ReadingCurveAnalysis? curve = null;
+        PowerMethod? from = null;
+        var effective = request;
+        if (distanceTask)
+        {
+            effective = WithDistanceRequirement(request);
+        }
+        else if (request.DistanceAcuity is not null || HasNearEstimateInputs(request.Estimates))
+        {
+            (comparison, curve) = Estimate(request);
+            if (request.RequiredPower is null)
+            {
+                var chosen = Choose(comparison) ?? throw new ArgumentException(
+                    "No required-power estimate could be made" + (curve?.Refusal is { } refusal ? ": " + refusal : ".") + " Enter the required equivalent power in dioptres instead.", nameof(request));
+                from = chosen.Method;
+                effective = request with { RequiredPower = chosen.EquivalentPower };
+            }
+        }
         var context = new OptionContext(effective);
         var options = new List<MagnifierOption>(distanceTask ? 2 : 7);
         var notConsidered = new List<NotConsidered>(distanceTask ? 6 : 2);
@@ -150,12 +193,81 @@ public static class Planner
         {
             MethodVersion = MethodVersion,
             Request = request,
+            RequiredPower = effective.RequiredPower!.Value,
+            RequiredPowerFrom = from,
+            Estimates = comparison,
+            ReadingCurve = curve,
             Options = ranked,
             KitDevices = kit,
             NotConsidered = ImmutableCollectionsMarshal.AsImmutableArray(notConsidered.ToArray()),
-            Cautions = CautionsFor(request, options, kit),
+            Cautions = CautionsFor(request, options, kit, context.AccommodationEstimated, comparison?.HasDisagreement ?? false),
         };
     }
+
+    /// <summary>
+    /// The estimates the request's measurements allow: Kestenbaum (as published, and with the reserve and target), the
+    /// near-acuity method and the reading-curve method, compared pairwise (methods §2.1–2.6).
+    /// </summary>
+    private static (EstimateComparison Comparison, ReadingCurveAnalysis? Curve) Estimate(PlanRequest request)
+    {
+        var inputs = request.Estimates ?? EstimateInputs.None;
+        var reserve = inputs.Reserve ?? EstimateInputs.DefaultReserveFor(request.Task);
+        var estimates = new List<PowerEstimate>(4);
+        ReadingCurveAnalysis? curve = null;
+        if (request.DistanceAcuity is { } acuity)
+        {
+            estimates.Add(KestenbaumRule.Classic(acuity));
+            estimates.Add(KestenbaumRule.WithReserve(acuity, request.TargetPrint, reserve));
+        }
+
+        if (inputs.NearThresholdPrint is { } threshold && inputs.NearTestDistance is { } nearDistance)
+        {
+            estimates.Add(NearAcuityMethod.Estimate(threshold, nearDistance, request.TargetPrint, reserve));
+        }
+
+        if (inputs.ReadingTestDistance is { } readingDistance)
+        {
+            if (inputs.CriticalPrintSize is { } cps)
+            {
+                estimates.Add(CriticalPrintSizeMethod.Estimate(cps, readingDistance, request.TargetPrint));
+            }
+            else if (!inputs.ReadingPoints.IsDefaultOrEmpty)
+            {
+                curve = ReadingCurve.Analyse(readingDistance, inputs.ReadingPoints);
+                if (curve.IsUsable)
+                {
+                    estimates.Add(CriticalPrintSizeMethod.Estimate(curve, request.TargetPrint));
+                }
+            }
+        }
+
+        return (EstimateReconciliation.Compare(estimates), curve);
+    }
+
+    /// <summary>
+    /// The estimate a plan uses when no power is entered: the reading curve, else the near-acuity method, else
+    /// Kestenbaum with reserve, since distance acuity often under-estimates the near need (Cheong, Lovie-Kitchin and
+    /// Bowers 2002; methods §2.1, §2.6).
+    /// </summary>
+    private static PowerEstimate? Choose(EstimateComparison comparison)
+    {
+        ReadOnlySpan<PowerMethod> preference = [PowerMethod.CriticalPrintSize, PowerMethod.NearAcuity, PowerMethod.KestenbaumWithReserve];
+        foreach (var method in preference)
+        {
+            foreach (var estimate in comparison.Estimates)
+            {
+                if (estimate.Method == method)
+                {
+                    return estimate;
+                }
+            }
+        }
+
+        return null;
+    }
+
+    private static bool HasNearEstimateInputs(EstimateInputs? inputs) =>
+        inputs is not null && inputs.CanEstimate(null);
 
     /// <summary>Not considered for distance tasks.</summary>
     public const string NearOnly = "A near device: not considered for distance viewing.";
@@ -173,7 +285,7 @@ public static class Planner
         return request with { RequiredPower = Power.FromDioptres(m / request.PreferredDistance.Abs().Metres) };
     }
 
-    private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> kit)
+    private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> kit, bool accommodationEstimated, bool estimatesDisagree)
     {
         var anyLens = false;
         var anyStrong = false;
@@ -196,10 +308,20 @@ public static class Planner
         var contrast = request.Constraints.LogContrastSensitivity is { } cs && cs < Ranking.LowContrast
             ? (cs < Ranking.VeryLowContrast ? Caution.VideoOrNonVisual : Caution.LightingAssessment)
             : null;
-        var count = 3 + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
+        var count = 3 + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
         var cautions = new Caution[count];
         var n = 0;
         cautions[n++] = Caution.StartingPoint;
+        if (estimatesDisagree)
+        {
+            cautions[n++] = Caution.EstimatesDisagree;
+        }
+
+        if (accommodationEstimated)
+        {
+            cautions[n++] = Caution.AccommodationEstimated;
+        }
+
         if (anyLens)
         {
             cautions[n++] = Caution.SunlightFire;
