@@ -1,0 +1,45 @@
+using System.Text.RegularExpressions;
+using UglyToad.PdfPig.Content;
+using PigDocument = UglyToad.PdfPig.PdfDocument;
+
+namespace LowVisionAid.Reports.Tests.Support;
+
+/// <summary>What PdfPig reads back from a rendered document.</summary>
+internal sealed partial class PdfText
+{
+    private PdfText(string words, IReadOnlyList<Letter> letters, int pages)
+    {
+        Words = words;
+        Letters = letters;
+        PageCount = pages;
+    }
+
+    /// <summary>Every word of every page, joined by single spaces (line breaks become spaces).</summary>
+    public string Words { get; }
+
+    public IReadOnlyList<Letter> Letters { get; }
+
+    public int PageCount { get; }
+
+    public static PdfText Read(ReadOnlyMemory<byte> pdf)
+    {
+        using var document = PigDocument.Open(pdf.ToArray());
+        var words = new List<string>();
+        var letters = new List<Letter>();
+        foreach (var page in document.GetPages())
+        {
+            words.AddRange(page.GetWords().Select(w => w.Text));
+            letters.AddRange(page.Letters);
+        }
+
+        return new PdfText(string.Join(' ', words), letters, document.NumberOfPages);
+    }
+
+    /// <summary>Collapses runs of white space, so wrapped text compares with the sentence it came from.</summary>
+    public static string Normalise(string text) => Spaces().Replace(text, " ").Trim();
+
+    public bool Contains(string sentence) => Words.Contains(Normalise(sentence), StringComparison.Ordinal);
+
+    [GeneratedRegex(@"\s+")]
+    private static partial Regex Spaces();
+}
