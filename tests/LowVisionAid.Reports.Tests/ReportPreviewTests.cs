@@ -27,6 +27,16 @@ public class ReportPreviewTests
         AssertIsPng(png);
     }
 
+    [NeedsPdftoppmFact]
+    public void The_clinician_summary_first_page_renders_to_a_png()
+    {
+        var result = new ClinicianSummaryRenderer(CultureInfo.InvariantCulture).Render(SampleModels.Summary());
+
+        var png = Artifacts.RenderFirstPage(Artifacts.Write("summary-a4.pdf", result.Content));
+
+        AssertIsPng(png);
+    }
+
     private static void AssertIsPng(string path)
     {
         var bytes = File.ReadAllBytes(path);
