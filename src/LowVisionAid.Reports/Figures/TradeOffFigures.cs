@@ -20,7 +20,12 @@ public sealed class TradeOffFigures(IFormatProvider? formatProvider = null)
 
     // Mean character pitch ÷ x-height used to space the drawn letters (k ≈ 1.1, methods.md §4.2, approximate).
     private const double LetterPitch = 1.1;
-    private const string SampleLetters = "readingwithamagnifierismadeeasierbypractice";
+    // Only letters about one x-height wide (a, b, c, d, e, g, h, k, n, o, p, q, s, u, v, x, y, z), so that the
+    // letters drawn at pitch k fill the window as text of that pitch would; no i, l, m or w.
+    private const string SampleLetters = "codebookshopsandsunnydaysneedgoodbooks";
+
+    // ISO 3 R10 preferred numbers, the 0.1 log-unit steps of letter charts (ISO 8596; methods.md §1.5).
+    private static readonly double[] PreferredSteps = [1.00, 1.25, 1.60, 2.00, 2.50, 3.15, 4.00, 5.00, 6.30, 8.00];
     private const double Width = 760;
 
     private readonly IFormatProvider _culture = formatProvider ?? CultureInfo.InvariantCulture;
@@ -225,7 +230,8 @@ public sealed class TradeOffFigures(IFormatProvider? formatProvider = null)
         svg.Add(Svg.Line(AxisX, Top, AxisX, Top + (steps * Step), width: 2));
         for (int s = 0; s <= steps; s++)
         {
-            double m = Math.Pow(10, highLog - (s / 10.0));
+            int tenths = (int)Math.Round((highLog * 10) - s);
+            double m = PreferredSteps[((tenths % 10) + 10) % 10] * Math.Pow(10, Math.Floor(tenths / 10.0));
             double y = Top + (s * Step);
             svg.Add(Svg.Line(AxisX - 6, y, AxisX, y));
             svg.Add(Svg.Text(AxisX - 10, y + 5, m.ToString(m < 1 ? "0.0#" : "0.0", _culture) + "M", 14, "end"));
