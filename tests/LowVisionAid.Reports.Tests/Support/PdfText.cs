@@ -40,6 +40,34 @@ internal sealed partial class PdfText
 
     public bool Contains(string sentence) => Words.Contains(Normalise(sentence), StringComparison.Ordinal);
 
+    /// <summary>
+    /// True when the words of <paramref name="phrase"/> appear in order, each within <paramref name="maxGap"/> words
+    /// of the last: a table cell that wraps interleaves its lines with the cells beside it.
+    /// </summary>
+    public bool ContainsInCell(string phrase, int maxGap = 12)
+    {
+        var words = Words.Split(' ');
+        var wanted = Normalise(phrase).Split(' ');
+        for (int start = 0; start < words.Length; start++)
+        {
+            if (words[start] != wanted[0])
+                continue;
+            int at = start, found = 1;
+            for (; found < wanted.Length; found++)
+            {
+                int next = Array.IndexOf(words, wanted[found], at + 1);
+                if (next < 0 || next - at > maxGap)
+                    break;
+                at = next;
+            }
+
+            if (found == wanted.Length)
+                return true;
+        }
+
+        return false;
+    }
+
     [GeneratedRegex(@"\s+")]
     private static partial Regex Spaces();
 }
