@@ -126,7 +126,9 @@ public class ClientHandoutRendererTests
         var result = Renderer.Render(SampleModels.Handout(body, paper, devices: list));
 
         Assert.InRange(result.PageCount, fewest, most);
-        Assert.Equal(result.PageCount, PdfText.Read(result.Content).PageCount);
+        var text = PdfText.Read(result.Content);
+        Assert.Equal(result.PageCount, text.PageCount);
+        Assert.Equal(Enumerable.Range(1, result.PageCount).Select(p => $"Page {p} of {result.PageCount} · Client code HX-0042"), text.Footers);
     }
 
     [Fact]

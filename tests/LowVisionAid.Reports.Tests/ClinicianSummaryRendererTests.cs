@@ -1,3 +1,5 @@
+using LowVisionAid.Optics.Quantities;
+using LowVisionAid.Reports.Figures;
 using LowVisionAid.Reports.Summaries;
 using LowVisionAid.Reports.Tests.Support;
 
@@ -73,6 +75,19 @@ public class ClinicianSummaryRendererTests
         Assert.True(text.Contains("01632 960 418"), text.Words);
         Assert.True(text.Contains("Morwenna Tredinnick (HX-0042)"), text.Words);
         Assert.True(text.Contains(ClinicianSummaryRenderer.StartingPointNote), text.Words);
+    }
+
+    [Fact]
+    public void Prints_the_trade_off_tables_it_is_given()
+    {
+        var figures = new TradeOffFigures(CultureInfo.InvariantCulture);
+        var ladder = figures.PrintSizeLadder(new PrintLadderData(PrintSize.FromM(4), PrintSize.FromM(1), AcuityReserve.Fluent, Distance.FromCentimetres(40)));
+
+        var text = Read(SampleModels.Summary() with { FigureTables = [ladder.Table] });
+
+        Assert.True(text.Contains(ladder.Table.Caption), text.Words);
+        foreach (var cell in ladder.Table.Rows.SelectMany(r => r).Where(c => c.Length > 0))
+            Assert.True(text.ContainsInCell(cell), cell);
     }
 
     [Fact]

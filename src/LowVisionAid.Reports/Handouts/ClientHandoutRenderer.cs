@@ -57,13 +57,19 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             void List(IEnumerable<string> items)
             {
                 foreach (var item in items.Where(i => !string.IsNullOrWhiteSpace(i)))
+                {
                     flow.Paragraph(item, regular, line, indent: body * 1.5, marker: "•");
+                    flow.Space(line * 0.2);
+                }
             }
 
             void Steps(IReadOnlyList<string> items)
             {
                 for (int i = 0; i < items.Count; i++)
+                {
                     flow.Paragraph(items[i], regular, line, indent: body * 1.8, marker: (i + 1).ToString(_culture) + ".");
+                    flow.Space(line * 0.2);
+                }
             }
 
             flow.Paragraph("Your magnifier plan", title, title.Size * 1.3);

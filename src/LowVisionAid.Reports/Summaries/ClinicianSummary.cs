@@ -16,6 +16,7 @@ namespace LowVisionAid.Reports.Summaries;
 /// <param name="Trials">Trials and their outcomes, oldest first.</param>
 /// <param name="MethodVersion">The version of the methods that produced the figures, e.g. "methods 2027.1".</param>
 /// <param name="Paper">A4 or Letter.</param>
+/// <param name="FigureTables">The trade-off figures' data tables to print with the record (from <see cref="Figures.TradeOffFigures"/>), or null.</param>
 public sealed record ClinicianSummary(
     ClinicContact Clinic,
     string ClientCode,
@@ -27,7 +28,8 @@ public sealed record ClinicianSummary(
     IReadOnlyList<ChosenOption> ChosenOptions,
     IReadOnlyList<TrialRecord> Trials,
     string MethodVersion,
-    PaperSize Paper = PaperSize.A4);
+    PaperSize Paper = PaperSize.A4,
+    IReadOnlyList<Figures.FigureTable>? FigureTables = null);
 
 /// <summary>One input as the record shows it, e.g. "Distance acuity" and "6/60 (logMAR 1.00)".</summary>
 /// <param name="Label">What was measured or chosen.</param>

@@ -113,6 +113,15 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                     t.Date.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), t.Device, t.Task, t.Result, t.Outcome,
                 }));
 
+            foreach (var figure in model.FigureTables ?? [])
+            {
+                if (figure.Columns.Count == 0)
+                    continue;
+                Heading(figure.Caption);
+                var columns = Enumerable.Repeat(1.0 / figure.Columns.Count, figure.Columns.Count).ToArray();
+                Table(columns, [.. figure.Columns], figure.Rows.Select(r => Enumerable.Range(0, figure.Columns.Count).Select(c => c < r.Count ? r[c] : string.Empty).ToArray()));
+            }
+
             flow.Space(Line);
             flow.Paragraph(StartingPointNote, regular, Line);
             flow.Finish("Clinician summary, client " + model.ClientCode + "  ·  " + model.MethodVersion, regular);

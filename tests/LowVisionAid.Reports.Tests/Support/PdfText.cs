@@ -7,15 +7,22 @@ namespace LowVisionAid.Reports.Tests.Support;
 /// <summary>What PdfPig reads back from a rendered document.</summary>
 internal sealed partial class PdfText
 {
-    private PdfText(string words, IReadOnlyList<Letter> letters, int pages)
+    private PdfText(string words, IReadOnlyList<string> footers, IReadOnlyList<Letter> letters, int pages)
     {
         Words = words;
+        Footers = footers;
         Letters = letters;
         PageCount = pages;
     }
 
-    /// <summary>Every word of every page, joined by single spaces (line breaks become spaces).</summary>
+    /// <summary>
+    /// Every word of every page but the footers, joined by single spaces (line breaks become spaces), so that a
+    /// sentence running over a page break reads as one.
+    /// </summary>
     public string Words { get; }
+
+    /// <summary>Each page's footer line ("Page i of n ...").</summary>
+    public IReadOnlyList<string> Footers { get; }
 
     public IReadOnlyList<Letter> Letters { get; }
 
@@ -25,14 +32,25 @@ internal sealed partial class PdfText
     {
         using var document = PigDocument.Open(pdf.ToArray());
         var words = new List<string>();
+        var footers = new List<string>();
         var letters = new List<Letter>();
         foreach (var page in document.GetPages())
         {
-            words.AddRange(page.GetWords().Select(w => w.Text));
+            var pageWords = page.GetWords().ToList();
+            // The footer is the lowest line on the page and starts with "Page".
+            double lowest = pageWords.Min(w => Math.Round(w.BoundingBox.Bottom));
+            var footer = pageWords.Where(w => Math.Abs(w.BoundingBox.Bottom - lowest) < 3).OrderBy(w => w.BoundingBox.Left).ToList();
+            if (footer.Count > 0 && footer[0].Text == "Page")
+            {
+                footers.Add(string.Join(' ', footer.Select(w => w.Text)));
+                pageWords = [.. pageWords.Except(footer)];
+            }
+
+            words.AddRange(pageWords.Select(w => w.Text));
             letters.AddRange(page.Letters);
         }
 
-        return new PdfText(string.Join(' ', words), letters, document.NumberOfPages);
+        return new PdfText(string.Join(' ', words), footers, letters, document.NumberOfPages);
     }
 
     /// <summary>Collapses runs of white space, so wrapped text compares with the sentence it came from.</summary>
