@@ -116,6 +116,24 @@ public class ClientHandoutRendererTests
         Assert.Contains("/FontFile2", System.Text.Encoding.Latin1.GetString(result.Content.Span), StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void States_its_title_author_and_paper_size()
+    {
+        var a4 = Renderer.Render(SampleModels.Handout());
+        var letter = Renderer.Render(SampleModels.Handout(paper: PaperSize.Letter));
+
+        using var document = UglyToad.PdfPig.PdfDocument.Open(a4.Content.ToArray());
+        Assert.Equal("Your magnifier plan, client HX-0042", document.Information.Title);
+        Assert.Equal("Harbourside Low Vision Clinic", document.Information.Author);
+        // A4 is 210 × 297 mm = 595.3 × 841.9 pt; Letter is 8.5 × 11 in = 612 × 792 pt (ISO 216; ANSI/ASME Y14.1).
+        var page = document.GetPage(1);
+        Assert.Equal(595.3, page.Width, 0.5);
+        Assert.Equal(841.9, page.Height, 0.5);
+        using var us = UglyToad.PdfPig.PdfDocument.Open(letter.Content.ToArray());
+        Assert.Equal(612, us.GetPage(1).Width, 0.5);
+        Assert.Equal(792, us.GetPage(1).Height, 0.5);
+    }
+
     [Theory]
     [InlineData(18.0, PaperSize.A4, 1, 2, 5)]
     [InlineData(24.0, PaperSize.Letter, 1, 3, 7)]

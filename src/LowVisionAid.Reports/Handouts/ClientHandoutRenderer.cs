@@ -3,7 +3,6 @@ using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Pdf;
 using PdfSharp.Drawing;
-using PdfSharp.Pdf;
 
 namespace LowVisionAid.Reports.Handouts;
 
@@ -30,10 +29,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             return ReportResult.Fail(error);
 
         HyperlegibleFont.EnsureRegistered();
-        using var document = new PdfDocument();
-        document.Info.Title = "Your magnifier plan, client " + model.ClientCode;
-        document.Info.Author = model.Clinic.Name;
-        document.Info.CreationDate = model.IssuedOn.ToDateTime(TimeOnly.MinValue);
+        using var document = PdfOutput.Create("Your magnifier plan, client " + model.ClientCode, model.Clinic.Name, model.IssuedOn);
 
         double body = model.BodyPoints;
         double line = body * 1.5;

@@ -3,7 +3,6 @@ using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Pdf;
 using PdfSharp.Drawing;
-using PdfSharp.Pdf;
 
 namespace LowVisionAid.Reports.Summaries;
 
@@ -32,10 +31,7 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
             return ReportResult.Fail(error);
 
         HyperlegibleFont.EnsureRegistered();
-        using var document = new PdfDocument();
-        document.Info.Title = "Clinician summary, client " + model.ClientCode;
-        document.Info.Author = model.Clinic.Name;
-        document.Info.CreationDate = model.AssessedOn.ToDateTime(TimeOnly.MinValue);
+        using var document = PdfOutput.Create("Clinician summary, client " + model.ClientCode, model.Clinic.Name, model.AssessedOn);
 
         const double Line = BodyPoints * 1.35;
         var regular = new XFont(HyperlegibleFont.FamilyName, BodyPoints, XFontStyleEx.Regular);
