@@ -188,6 +188,28 @@ public class TradeOffFiguresTests
     }
 
     [Fact]
+    public void Ladder_rungs_carry_the_r10_preferred_numbers()
+    {
+        // ISO 3 R10 series, the 0.1 log-unit size steps of letter charts (ISO 8596; methods.md §1.5).
+        var svg = XElement.Parse(Figures.PrintSizeLadder(new PrintLadderData(PrintSize.FromM(4), Target, AcuityReserve.Fluent)).Svg);
+
+        var rungs = svg.Descendants(S + "text").Where(t => (string?)t.Attribute("text-anchor") == "end").Select(t => t.Value).ToList();
+        Assert.Equal(["12.5M", "10.0M", "8.0M", "6.3M", "5.0M", "4.0M", "3.15M", "2.5M", "2.0M", "1.6M", "1.25M", "1.0M", "0.8M"], rungs);
+    }
+
+    [Fact]
+    public void Ladder_labels_stay_apart_when_the_reserve_is_1_to_1()
+    {
+        // With a 1:1 reserve the comfortable size equals the threshold, so their marks share a rung.
+        var svg = XElement.Parse(Figures.PrintSizeLadder(new PrintLadderData(PrintSize.FromM(2), Target, AcuityReserve.Spot)).Svg);
+
+        var labelYs = svg.Descendants(S + "text").Where(t => t.Value.Contains(": ", StringComparison.Ordinal) && t.Attribute("text-anchor") is null)
+            .Select(t => double.Parse((string)t.Attribute("y")!, CultureInfo.InvariantCulture)).Order().ToList();
+        Assert.Equal(3, labelYs.Count);
+        Assert.All(labelYs.Zip(labelYs.Skip(1)), pair => Assert.True(pair.Second - pair.First >= 22, $"{pair.First} and {pair.Second}"));
+    }
+
+    [Fact]
     public void A_bad_id_or_no_options_is_refused_with_a_message_saying_what_to_pass()
     {
         var noOptions = Assert.Throws<ArgumentException>(() => Figures.PowerAgainstDistanceAndField([]));

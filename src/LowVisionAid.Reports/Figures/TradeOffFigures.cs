@@ -234,7 +234,7 @@ public sealed class TradeOffFigures(IFormatProvider? formatProvider = null)
             double m = PreferredSteps[((tenths % 10) + 10) % 10] * Math.Pow(10, Math.Floor(tenths / 10.0));
             double y = Top + (s * Step);
             svg.Add(Svg.Line(AxisX - 6, y, AxisX, y));
-            svg.Add(Svg.Text(AxisX - 10, y + 5, m.ToString(m < 1 ? "0.0#" : "0.0", _culture) + "M", 14, "end"));
+            svg.Add(Svg.Text(AxisX - 10, y + 5, m.ToString("0.0#", _culture) + "M", 14, "end"));
         }
 
         // Labels keep at least 22 px apart even when two sizes share a rung (e.g. a 1:1 reserve).
