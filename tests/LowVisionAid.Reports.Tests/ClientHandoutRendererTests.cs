@@ -1,3 +1,4 @@
+using CsCheck;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Handouts;
@@ -269,6 +270,32 @@ public class ClientHandoutRendererTests
         Parallel.For(0, texts.Length, i => texts[i] = PdfText.Read(new ClientHandoutRenderer(CultureInfo.InvariantCulture).Render(model).Content).Words);
 
         Assert.All(texts, t => Assert.Equal(texts[0], t));
+    }
+
+    [Fact]
+    public void Prints_central_european_letters_in_the_same_face_and_a_base_letter_for_one_the_face_lacks()
+    {
+        // The shipped faces have Ł and ę but no Ŵ (U+0174): PDFsharp would drop it silently, so it prints as W.
+        var text = Read(SampleModels.Handout() with { ClientName = "Siân Łęcka-Ŵynne" });
+
+        Assert.True(text.Contains("For: Siân Łęcka-Wynne (client code HX-0042)"), text.Words);
+        Assert.Equal(2, text.Letters.Count(l => l.Value is "Ł" or "ę"));
+        Assert.All(text.Letters.Where(l => l.Value is "Ł" or "ę"), l => Assert.Contains("Atkinson Hyperlegible", l.FontName, StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Wrapping_never_loses_or_reorders_a_word()
+    {
+        var word = Gen.String[Gen.Char['a', 'z'], 1, 12];
+        var sentence = word.Array[1, 40].Select(w => string.Join(' ', w));
+
+        Gen.Select(sentence.Array[1, 6], Gen.Int[0, 2].Select(i => new[] { 18.0, 24.0, 36.0 }[i])).Sample((lines, body) =>
+        {
+            var model = SampleModels.Handout(body) with { Practice = lines };
+            var text = Read(model);
+            foreach (var line in lines)
+                Assert.True(text.Contains(line), line);
+        }, iter: 15, threads: 1);
     }
 
     [Fact]

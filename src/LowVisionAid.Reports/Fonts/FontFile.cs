@@ -22,6 +22,36 @@ internal static class FontFile
         return version >= 2 && sxHeight > 0 && unitsPerEm > 0 ? (double)sxHeight / unitsPerEm : null;
     }
 
+    /// <summary>
+    /// The Basic Multilingual Plane characters the font maps to a glyph, from its cmap format 4 subtable
+    /// (OpenType spec, 'cmap'). Empty when the font has none.
+    /// </summary>
+    public static HashSet<char> MappedCharacters(ReadOnlySpan<byte> font)
+    {
+        var mapped = new HashSet<char>();
+        if (FindTable(font, "cmap") is not { } cmap)
+            return mapped;
+        int tables = BinaryPrimitives.ReadUInt16BigEndian(font.Slice(cmap.Offset + 2, 2));
+        for (int i = 0; i < tables; i++)
+        {
+            int record = cmap.Offset + 4 + (8 * i);
+            int sub = cmap.Offset + checked((int)BinaryPrimitives.ReadUInt32BigEndian(font.Slice(record + 4, 4)));
+            if (BinaryPrimitives.ReadUInt16BigEndian(font.Slice(sub, 2)) != 4)
+                continue;
+            int segments = BinaryPrimitives.ReadUInt16BigEndian(font.Slice(sub + 6, 2)) / 2;
+            int ends = sub + 14, starts = ends + (2 * segments) + 2;
+            for (int s = 0; s < segments; s++)
+            {
+                int end = BinaryPrimitives.ReadUInt16BigEndian(font.Slice(ends + (2 * s), 2));
+                int start = BinaryPrimitives.ReadUInt16BigEndian(font.Slice(starts + (2 * s), 2));
+                for (int c = start; c <= end && c < 0xFFFF; c++)
+                    mapped.Add((char)c);
+            }
+        }
+
+        return mapped;
+    }
+
     private static (int Offset, int Length)? FindTable(ReadOnlySpan<byte> font, string tag)
     {
         if (font.Length < 12)

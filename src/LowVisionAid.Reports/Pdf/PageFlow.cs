@@ -1,3 +1,4 @@
+using LowVisionAid.Reports.Fonts;
 using PdfSharp.Drawing;
 using PdfSharp.Pdf;
 
@@ -50,7 +51,7 @@ internal sealed class PageFlow : IDisposable
     {
         double x = Left + indent;
         double width = Width - indent;
-        var lines = Wrap(text, font, width);
+        var lines = Wrap(GlyphCoverage.Fit(text), font, width);
         for (int i = 0; i < lines.Count; i++)
         {
             KeepTogether(lineHeight);
@@ -70,7 +71,7 @@ internal sealed class PageFlow : IDisposable
         const double Gap = 6;
         var wrapped = new List<IReadOnlyList<string>>(cells.Count);
         for (int c = 0; c < cells.Count; c++)
-            wrapped.Add(Wrap(cells[c], font, (Width * columnFractions[c]) - Gap));
+            wrapped.Add(Wrap(GlyphCoverage.Fit(cells[c]), font, (Width * columnFractions[c]) - Gap));
         int lineCount = wrapped.Max(w => w.Count);
         KeepTogether((lineCount * lineHeight) + 4);
         double x = Left;
@@ -106,7 +107,7 @@ internal sealed class PageFlow : IDisposable
             using var gfx = XGraphics.FromPdfPage(page, XGraphicsPdfPageOptions.Append);
             double baseline = page.Height.Point - _margin - (_footerHeight * 0.25);
             gfx.DrawLine(new XPen(XColors.Black, 1), _margin, baseline - (font.Size * 1.3), page.Width.Point - _margin, baseline - (font.Size * 1.3));
-            gfx.DrawString(Pages(i + 1, count) + "  ·  " + footerText, font, XBrushes.Black, _margin, baseline);
+            gfx.DrawString(GlyphCoverage.Fit(Pages(i + 1, count) + "  ·  " + footerText), font, XBrushes.Black, _margin, baseline);
         }
     }
 
