@@ -195,6 +195,20 @@ public class ClientHandoutRendererTests
         }
     }
 
+    [Theory]
+    [InlineData(0.4)]
+    [InlineData(10.0)]
+    public void The_check_line_prints_whole_at_the_smallest_and_largest_targets(double targetM)
+    {
+        // 10M is about 83 pt, wider than the page: the line wraps but keeps every word.
+        var result = Renderer.Render(SampleModels.Handout(targetM: targetM));
+        var text = PdfText.Read(result.Content);
+
+        Assert.True(text.Contains(HandoutWording.TargetSizeLine), text.Words);
+        double expectedPoints = ClientHandoutRenderer.PointsFor(PrintSize.FromM(targetM));
+        Assert.Equal(HandoutWording.TargetSizeLine.Count(c => c != ' '), text.Letters.Count(l => l.Value != " " && Math.Abs(l.PointSize - expectedPoints) < 0.01));
+    }
+
     [Fact]
     public void The_x_height_ratio_read_from_the_font_matches_the_x_drawn_in_the_pdf()
     {
