@@ -79,6 +79,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             {
                 Heading("Your " + LowerFirst(device.Name));
                 Text("What it is: " + device.WhatItIs);
+                flow.Space(line * 0.2);
                 Text("Use it for: " + device.Task);
                 if (device.Distances.Count > 0)
                 {
