@@ -82,7 +82,7 @@ public static partial class DistanceAcuityNotation
             return FromLetterScore(top, letters, options.LettersPerLine);
         }
 
-        if ((match = BareNumberPattern().Match(normalised)).Success)
+        if ((match = NotationText.BareNumberPattern().Match(normalised)).Success)
         {
             return ReadBareNumber(match.Value, provider, options.BareNumbers);
         }
@@ -266,8 +266,6 @@ public static partial class DistanceAcuityNotation
     [GeneratedRegex(@"^top(?:\s*line)?:?\s*(?:log\s?mar\s*)?(?<top>" + NotationText.SignedNumber + @")(?:\s*log\s?mar)?\s*[,;+]?\s*(?<n>[0-9]+)\s*letters?(?:\s*(?:correct|read))?$", RegexOptions.CultureInvariant)]
     private static partial Regex LetterScorePattern();
 
-    [GeneratedRegex("^" + NotationText.SignedNumber + "$", RegexOptions.CultureInvariant)]
-    private static partial Regex BareNumberPattern();
 
     /// <summary>A non-chart level followed by anything (e.g. a distance that could not be read).</summary>
     [GeneratedRegex(@"^(?:cf|hm|nlp|npl|lp|pl|count(?:ing)? fingers?|hand (?:motions?|movements?)|(?:no )?light perception)\b", RegexOptions.CultureInvariant)]
