@@ -38,12 +38,12 @@ public readonly record struct NearAcuity
     {
         if (!threshold.IsValid)
         {
-            throw new ArgumentOutOfRangeException(nameof(threshold), threshold, "The threshold print size must be greater than zero.");
+            throw new ArgumentOutOfRangeException(nameof(threshold), threshold, "The threshold print size must be greater than zero; enter the smallest print read, such as 1.0M.");
         }
 
         if (!(testDistance.Metres > 0))
         {
-            throw new ArgumentOutOfRangeException(nameof(testDistance), testDistance, "The test distance must be greater than zero.");
+            throw new ArgumentOutOfRangeException(nameof(testDistance), testDistance, "The test distance must be greater than zero; enter the distance the print was read at, such as 40 cm.");
         }
 
         return new NearAcuity(threshold, testDistance, Acuity.FromNearThreshold(threshold, testDistance));
