@@ -23,10 +23,14 @@ public readonly record struct Acuity : IComparable<Acuity>, IFormattable
     public double LogMar => _logMar;
 
     /// <summary>MAR in arcminutes = 10^logMAR.</summary>
-    public double MarArcminutes => Math.Pow(10, _logMar);
+    public double MarArcminutes =>
+        // MAR = 10^logMAR (Bailey and Lovie 1976).
+        Math.Pow(10, _logMar);
 
     /// <summary>Decimal acuity = 1 / MAR = 10^−logMAR.</summary>
-    public double DecimalValue => Math.Pow(10, -_logMar);
+    public double DecimalValue =>
+        // V_dec = 1 / MAR = 10^−logMAR (Bailey and Lovie 1976).
+        Math.Pow(10, -_logMar);
 
     /// <summary>Visual acuity score VAS = 100 − 50 × logMAR (DICOM PS3.17 Annex RR.2.2).</summary>
     public double VisualAcuityScore =>

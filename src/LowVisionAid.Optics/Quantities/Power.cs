@@ -44,7 +44,9 @@ public readonly record struct Power : IComparable<Power>, IFormattable
     /// Magnification relative to a reference viewing distance: M = F × d_ref (Bailey 2004 notes).
     /// With 25 cm this is F/4; with 40 cm, F/2.5. Always state the reference used.
     /// </summary>
-    public double MagnificationRelativeTo(Distance reference) => _dioptres * reference.Metres;
+    public double MagnificationRelativeTo(Distance reference) =>
+        // M = Feq × d_ref (Bailey 2004 notes).
+        _dioptres * reference.Metres;
 
     /// <summary>The absolute value of the power.</summary>
     public Power Abs() => new(Math.Abs(_dioptres));

@@ -35,6 +35,7 @@ public readonly record struct VisualAngle : IComparable<VisualAngle>, IFormattab
     /// θ = 2·atan(h / 2d) (exact for an object centred on the line of sight).
     /// </summary>
     public static VisualAngle Subtended(Distance size, Distance distance) =>
+        // θ = 2·atan(h / 2d) (plane geometry, object centred on the line of sight).
         FromRadians(2.0 * Math.Atan(size.Abs().Metres / (2.0 * Guard.Positive(distance.Metres, nameof(distance), "A viewing distance", "40 cm"))));
 
     /// <inheritdoc/>
