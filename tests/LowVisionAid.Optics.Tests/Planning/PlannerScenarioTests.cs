@@ -136,6 +136,8 @@ public class PlannerScenarioTests
         Tolerance.WithinRelative(69.99, o.LinearField!.Value.Millimetres, Rel);
         Tolerance.WithinRelative(43.75, o.CharactersInView!.Value, Rel);
         Tolerance.WithinRelative(5.905, o.DepthOfField!.Value.Millimetres, Rel);
+        // OVS 1994 (methods §3.5): the same depth of field as a spectacle add of equal equivalent power (both 10 D here).
+        Assert.Equal(Option<SpectacleAddOption>().DepthOfField, o.DepthOfField);
     }
 
     [Fact]
