@@ -1,3 +1,5 @@
+using LowVisionAid.Web.Infrastructure;
+
 var builder = WebApplication.CreateBuilder(args);
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
@@ -6,7 +8,8 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
     builder.WebHost.UseUrls("http://127.0.0.1:5080");
 }
 
-builder.Services.AddRazorPages();
+builder.AddClinicData();     // SQLite file in the data folder, migrations from LowVisionAid.Migrations
+builder.AddClinicPages();    // Razor Pages, validators and the clinic-flow handlers
 
 var app = builder.Build();
 
@@ -19,4 +22,5 @@ app.UseStaticFiles();
 app.UseRouting();
 app.MapRazorPages();
 
+await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 await app.RunAsync().ConfigureAwait(false);
