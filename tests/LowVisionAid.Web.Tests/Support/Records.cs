@@ -43,7 +43,7 @@ public static class Records
         ["Input.Practitioner"] = "Test practitioner",
         ["Input.DistanceRight"] = "6/60",
         ["Input.DistanceLeft"] = "20/400",
-        ["Input.DistanceBoth"] = "0.1",
+        ["Input.DistanceBoth"] = "0.1 decimal",
         ["Input.NearThreshold"] = "4M",
         ["Input.NearTestDistance"] = "40 cm",
         ["Input.AddWorn"] = "+2.50",
