@@ -1,4 +1,6 @@
 using LowVisionAid.Data.Entities;
+using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
+using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Web.Tests.Support;
 
@@ -30,7 +32,7 @@ public static class Records
     public static Task<int> KitDeviceAsync(this ClinicApp app, string code, string name) =>
         app.WithDbAsync(async db =>
         {
-            var device = new KitDevice { Code = code, Name = name, Kind = KitDeviceKind.HandMagnifier };
+            var device = new KitDevice { Code = code, Name = name, Kind = DeviceKind.HandMagnifier, Power = Power.FromDioptres(12), Aperture = Distance.FromMillimetres(50) };
             db.KitDevices.Add(device);
             await db.SaveChangesAsync();
             return device.Id;

@@ -82,6 +82,8 @@ public sealed class GoalInput
 
     public string? TargetPrint { get; set; }
 
+    public bool IsDistanceTask => Enum.TryParse<GoalTask>(Task, out var task) && VisitGoal.IsDistanceTask(task);
+
     public bool IsUsed => !string.IsNullOrWhiteSpace(Task) || !string.IsNullOrWhiteSpace(TargetPrint) || !string.IsNullOrWhiteSpace(Detail);
 }
 
@@ -144,8 +146,11 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
                 .WithMessage("Choose the task from the list, such as Newspaper.");
             goal.RuleFor(g => g.TargetPrint)
                 .NotEmpty().When(g => g.IsUsed)
-                .WithMessage("Type the print size this task needs, such as 1M for newspaper text.");
-            goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize);
+                .WithMessage(g => g.IsDistanceTask
+                    ? "Type the distance acuity this task needs, such as 6/12 for television."
+                    : "Type the print size this task needs, such as 1M for newspaper text.");
+            goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize).When(g => !g.IsDistanceTask);
+            goal.RuleFor(g => g.TargetPrint).Reads(Readings.Acuity).When(g => g.IsDistanceTask);
             goal.RuleFor(g => g.Detail).MaximumLength(FieldLimits.Name).WithMessage($"Keep the task detail to {FieldLimits.Name} characters or fewer.");
         });
 
