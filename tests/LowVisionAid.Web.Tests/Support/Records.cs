@@ -29,10 +29,10 @@ public static class Records
             return (client.Id, visit.Plans[0].Id);
         });
 
-    public static Task<int> KitDeviceAsync(this ClinicApp app, string code, string name) =>
+    public static Task<int> KitDeviceAsync(this ClinicApp app, string code, string name, double dioptres = 12) =>
         app.WithDbAsync(async db =>
         {
-            var device = new KitDevice { Code = code, Name = name, Kind = DeviceKind.HandMagnifier, Power = Power.FromDioptres(12), Aperture = Distance.FromMillimetres(50) };
+            var device = new KitDevice { Code = code, Name = name, Kind = DeviceKind.HandMagnifier, Power = Power.FromDioptres(dioptres), Aperture = Distance.FromMillimetres(50) };
             db.KitDevices.Add(device);
             await db.SaveChangesAsync();
             return device.Id;
