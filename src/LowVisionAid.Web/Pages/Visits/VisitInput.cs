@@ -100,6 +100,9 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
 {
     public const int MaximumWordsPerMinute = 1000;
 
+    /// <summary>The largest amplitude of accommodation the core accepts as measured.</summary>
+    public const double MaximumAmplitude = 30;
+
     public VisitInputValidator(TimeProvider clock)
     {
         ArgumentNullException.ThrowIfNull(clock);
@@ -134,6 +137,12 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
         RuleFor(v => v.RefractionWorn).MaximumLength(FieldLimits.Name).WithMessage($"Keep the refraction to {FieldLimits.Name} characters or fewer.");
         RuleFor(v => v.AddWorn).Reads(Readings.Power);
         RuleFor(v => v.Accommodation).Reads(Readings.Power);
+        RuleFor(v => v.Accommodation)
+            .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var amplitude) || amplitude.Dioptres is >= 0 and <= MaximumAmplitude)
+            .WithMessage($"Type the measured amplitude of accommodation between 0 and {MaximumAmplitude} D, such as 8, or leave it empty to estimate it from age.");
+        RuleFor(v => v.AddWorn)
+            .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var add) || add.Dioptres >= 0)
+            .WithMessage("A reading add is a plus power; type it such as +2.50, or leave it empty.");
         RuleFor(v => v.WorkingDistance).Reads(Readings.Distance);
         RuleFor(v => v.Notes).MaximumLength(FieldLimits.Notes).WithMessage($"Keep the notes to {FieldLimits.Notes} characters or fewer.");
         RuleFor(v => v.UsefulEyes).IsInEnum().WithMessage("Choose which eyes are useful from the list.");
