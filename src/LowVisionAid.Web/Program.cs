@@ -1,3 +1,5 @@
+using LowVisionAid.Web.Infrastructure;
+
 var builder = WebApplication.CreateBuilder(args);
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
@@ -6,9 +8,12 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
     builder.WebHost.UseUrls("http://127.0.0.1:5080");
 }
 
+builder.AddClinicData();                    // SQLite file in the data folder, migrations from LowVisionAid.Migrations
+builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
 builder.Services.AddRazorPages();
 
 var app = builder.Build();
+await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 
 if (!app.Environment.IsDevelopment())
 {
