@@ -1,3 +1,5 @@
+using LowVisionAid.Web.Errors;
+
 var builder = WebApplication.CreateBuilder(args);
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
@@ -7,14 +9,11 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
 }
 
 builder.Services.AddRazorPages();
+builder.Services.AddFriendlyErrors();
 
 var app = builder.Build();
 
-if (!app.Environment.IsDevelopment())
-{
-    app.UseExceptionHandler("/Error");
-}
-
+app.UseFriendlyErrors();
 app.UseStaticFiles();
 app.UseRouting();
 app.MapRazorPages();
