@@ -6,33 +6,43 @@ namespace LowVisionAid.Web.Pages;
 
 public sealed class DisplayModel : PageModel
 {
+    // Bound as text and read here, so a stale or tampered value gets our message, not the binder's.
     [BindProperty]
-    public ColourScheme Scheme { get; set; }
+    public string? Scheme { get; set; }
 
     [BindProperty]
-    public TextSize Text { get; set; }
+    public string? Text { get; set; }
 
     [BindProperty(SupportsGet = true)]
     public string? ReturnUrl { get; set; }
 
     public bool Saved { get; private set; }
 
+    public ColourScheme ChosenScheme { get; private set; }
+
+    public TextSize ChosenText { get; private set; }
+
     public void OnGet(bool saved = false)
     {
         var current = DisplayPreferences.From(Request);
-        Scheme = current.Scheme;
-        Text = current.Text;
+        ChosenScheme = current.Scheme;
+        ChosenText = current.Text;
         Saved = saved;
     }
 
     public IActionResult OnPost()
     {
-        if (!Enum.IsDefined(Scheme))
+        var schemeRead = Enum.TryParse<ColourScheme>(Scheme, ignoreCase: false, out var scheme) && Enum.IsDefined(scheme);
+        var textRead = Enum.TryParse<TextSize>(Text, ignoreCase: false, out var text) && Enum.IsDefined(text);
+        ChosenScheme = scheme;
+        ChosenText = text;
+
+        if (!schemeRead)
         {
             ModelState.AddModelError(nameof(Scheme), "Choose standard colours or high contrast.");
         }
 
-        if (!Enum.IsDefined(Text))
+        if (!textRead)
         {
             ModelState.AddModelError(nameof(Text), "Choose standard or large text.");
         }
@@ -42,7 +52,7 @@ public sealed class DisplayModel : PageModel
             return Page();
         }
 
-        new DisplayPreferences(Scheme, Text).WriteTo(Response);
+        new DisplayPreferences(scheme, text).WriteTo(Response);
         return IsSafeReturnUrl(ReturnUrl)
             ? LocalRedirect(ReturnUrl!)
             : RedirectToPage(new { saved = true });

@@ -1,0 +1,45 @@
+namespace LowVisionAid.Browser.Tests.Infrastructure;
+
+/// <summary>The pages every page-wide check (axe scan, reflow, zoom) visits, with the heading each must show.</summary>
+public static class SitePages
+{
+    /// <summary>Address (relative) and the text of its h1.</summary>
+    public static readonly IReadOnlyList<(string Path, string Heading)> All =
+    [
+        ("", "LowVisionAid"),
+        ("Display", "Display settings"),
+        ("no-such-page", "Page not found"),
+    ];
+
+    public static TheoryData<string, string> Paths()
+    {
+        var data = new TheoryData<string, string>();
+        foreach (var (path, heading) in All)
+        {
+            data.Add(path, heading);
+        }
+
+        return data;
+    }
+
+    /// <summary>Every page in both colour schemes.</summary>
+    public static TheoryData<string, string, bool> PathsInBothSchemes()
+    {
+        var data = new TheoryData<string, string, bool>();
+        foreach (var (path, heading) in All)
+        {
+            data.Add(path, heading, false);
+            data.Add(path, heading, true);
+        }
+
+        return data;
+    }
+
+    /// <summary>Sets the display cookie directly, as the display settings form would.</summary>
+    public static Task UseDisplayAsync(IBrowserContext context, Uri baseAddress, bool highContrast, bool largeText)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var value = (highContrast ? "scheme-contrast" : "scheme-standard") + "." + (largeText ? "text-large" : "text-standard");
+        return context.AddCookiesAsync([new Cookie { Name = "lva-display", Value = value, Url = baseAddress.ToString() }]);
+    }
+}
