@@ -5,7 +5,7 @@ public sealed class SiteChrome(IPage page)
 {
     private const string SkipLinkName = "Skip to main content";
     private const string NavigationName = "Main";
-    private const string DisplayLinkName = "Display settings: colours and text size";
+    private const string DisplayLinkName = "Display settings";
     private const string MainSelector = "main#main";
 
     public ILocator SkipLink => page.GetByRole(AriaRole.Link, new() { Name = SkipLinkName });
@@ -14,7 +14,7 @@ public sealed class SiteChrome(IPage page)
 
     public ILocator NavigationLink(string name) => Navigation.GetByRole(AriaRole.Link, new() { Name = name, Exact = true });
 
-    public ILocator DisplaySettingsLink => page.GetByRole(AriaRole.Link, new() { Name = DisplayLinkName });
+    public ILocator DisplaySettingsLink => page.GetByRole(AriaRole.Banner).GetByRole(AriaRole.Link, new() { Name = DisplayLinkName, Exact = true });
 
     public ILocator Main => page.Locator(MainSelector);
 

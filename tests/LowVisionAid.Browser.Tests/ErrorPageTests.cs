@@ -1,0 +1,42 @@
+using LowVisionAid.Browser.Tests.Infrastructure;
+using LowVisionAid.Browser.Tests.PageObjects;
+
+namespace LowVisionAid.Browser.Tests;
+
+[Collection(BrowserTestGroup.Name)]
+[Trait("Category", "Browser")]
+public sealed class ErrorPageTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+{
+    [Theory]
+    [InlineData("no-such-page")]
+    [InlineData("Calculator/nothing/here")]
+    [InlineData("css/missing.css")]
+    public async Task An_unknown_address_gives_the_friendly_not_found_page_with_status_404(string path)
+    {
+        // Act
+        var response = await Page.GotoAsync(path);
+
+        // Assert
+        Assert.NotNull(response);
+        Assert.Equal(404, response.Status);
+        await Assertions.Expect(new SiteChrome(Page).Heading).ToHaveTextAsync("Page not found");
+        await Assertions.Expect(Page.GetByRole(AriaRole.Link, new() { Name = "home page" })).ToBeVisibleAsync();
+        var text = await Page.Locator("body").InnerTextAsync();
+        Assert.DoesNotContain("Exception", text, StringComparison.Ordinal);
+        Assert.DoesNotContain(" at ", text.Replace("at this address", "", StringComparison.Ordinal), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task The_api_answers_an_unknown_address_with_problem_details_not_a_page()
+    {
+        // Act
+        var response = await Page.APIRequest.GetAsync("api/no-such-endpoint");
+
+        // Assert
+        Assert.Equal(404, response.Status);
+        Assert.StartsWith("application/problem+json", response.Headers["content-type"], StringComparison.Ordinal);
+        var body = await response.JsonAsync();
+        Assert.Equal(404, body!.Value.GetProperty("status").GetInt32());
+        Assert.Equal("Not Found", body.Value.GetProperty("title").GetString());
+    }
+}

@@ -1,0 +1,62 @@
+using LowVisionAid.Browser.Tests.Infrastructure;
+using LowVisionAid.Browser.Tests.PageObjects;
+
+namespace LowVisionAid.Browser.Tests;
+
+/// <summary>Reflow at 320 CSS px (WCAG 1.4.10) and use at 200% zoom (1.4.4), in both schemes and text sizes.</summary>
+[Collection(BrowserTestGroup.Name)]
+[Trait("Category", "Browser")]
+public sealed class LayoutTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+{
+    [Theory]
+    [MemberData(nameof(SitePages.PathsInBothSchemes), MemberType = typeof(SitePages))]
+    public async Task Every_page_reflows_at_320_css_pixels_without_sideways_scrolling(string path, string heading, bool highContrast)
+    {
+        // Arrange: 320 × 256 CSS px is the WCAG reflow case (1280 px at 400%). Large text makes it harder still.
+        var page = await NewPageAsync(320, 256, highContrast: highContrast, largeText: true);
+        var chrome = new SiteChrome(page);
+
+        // Act
+        await page.GotoAsync(path);
+
+        // Assert
+        await Assertions.Expect(chrome.Heading).ToHaveTextAsync(heading);
+        await Artifacts.ScreenshotAsync(page, $"reflow-320-{(path.Length == 0 ? "home" : path)}-{(highContrast ? "contrast" : "standard")}");
+        Assert.False(await chrome.ScrollsSidewaysAsync(), $"/{path} scrolls sideways at 320 CSS px.");
+        await AssertEveryNavigationLinkFitsAsync(page, chrome, 320);
+    }
+
+    [Theory]
+    [MemberData(nameof(SitePages.Paths), MemberType = typeof(SitePages))]
+    public async Task Every_page_is_usable_at_200_percent_zoom(string path, string heading)
+    {
+        // Arrange: browser zoom at 200% on a 1280 × 900 window lays the page out in 640 × 450 CSS px at twice the
+        // pixel density, which is what this context emulates.
+        var page = await NewPageAsync(640, 450, scale: 2);
+        var chrome = new SiteChrome(page);
+
+        // Act
+        await page.GotoAsync(path);
+
+        // Assert
+        await Assertions.Expect(chrome.Heading).ToHaveTextAsync(heading);
+        await Artifacts.ScreenshotAsync(page, $"zoom-200-{(path.Length == 0 ? "home" : path)}");
+        Assert.False(await chrome.ScrollsSidewaysAsync(), $"/{path} scrolls sideways at 200% zoom.");
+        await AssertEveryNavigationLinkFitsAsync(page, chrome, 640);
+        var fontSize = await page.EvaluateAsync<double>("() => parseFloat(getComputedStyle(document.body).fontSize)");
+        Assert.True(fontSize >= 18, $"Body text is {fontSize} CSS px; it should be at least 18 before zoom.");
+    }
+
+    private static async Task AssertEveryNavigationLinkFitsAsync(IPage page, SiteChrome chrome, int width)
+    {
+        var links = await chrome.Navigation.GetByRole(AriaRole.Link).AllAsync();
+        Assert.Equal(6, links.Count);
+        foreach (var link in links)
+        {
+            var box = await link.BoundingBoxAsync();
+            Assert.NotNull(box);
+            Assert.True(box.X >= 0 && box.X + box.Width <= width + 1,
+                $"The link '{await link.TextContentAsync()}' on {page.Url} runs off the {width} px window (x {box.X}, width {box.Width}).");
+        }
+    }
+}
