@@ -9,11 +9,17 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
 }
 
 builder.Services.AddRazorPages();
-builder.Services.AddFriendlyErrors();
+
+builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
 
 var app = builder.Build();
 
-app.UseFriendlyErrors();
+if (!app.Environment.IsDevelopment())
+{
+    app.UseExceptionHandler("/Error");
+}
+
+app.UseFriendlyErrors();                    // not-found page for people, ProblemDetails under /api
 app.UseStaticFiles();
 app.UseRouting();
 app.MapRazorPages();

@@ -39,4 +39,37 @@ public sealed class ErrorPageTests(BrowserSession browser, AppServer app) : Brow
         Assert.Equal(404, body!.Value.GetProperty("status").GetInt32());
         Assert.Equal("Not Found", body.Value.GetProperty("title").GetString());
     }
+
+    [Theory]
+    [InlineData("GET")]
+    [InlineData("POST")]
+    public async Task A_fault_shows_the_something_went_wrong_page_without_any_technical_detail(string method)
+    {
+        // Act
+        var response = await Page.APIRequest.FetchAsync(FaultInjection.SitePath.TrimStart('/'), new() { Method = method });
+
+        // Assert
+        Assert.Equal(500, response.Status);
+        var html = await response.TextAsync();
+        Assert.Contains("<h1>Something went wrong</h1>", html, StringComparison.Ordinal);
+        Assert.DoesNotContain(FaultInjection.Secret, html, StringComparison.Ordinal);
+        Assert.DoesNotContain("InvalidOperationException", html, StringComparison.Ordinal);
+        Assert.DoesNotContain(".cs:line", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task A_fault_in_the_api_gives_problem_details_without_any_technical_detail()
+    {
+        // Act
+        var response = await Page.APIRequest.GetAsync(FaultInjection.ApiPath.TrimStart('/'));
+
+        // Assert
+        Assert.Equal(500, response.Status);
+        Assert.StartsWith("application/problem+json", response.Headers["content-type"], StringComparison.Ordinal);
+        var text = await response.TextAsync();
+        Assert.DoesNotContain(FaultInjection.Secret, text, StringComparison.Ordinal);
+        Assert.DoesNotContain("InvalidOperationException", text, StringComparison.Ordinal);
+        var body = await response.JsonAsync();
+        Assert.Equal(500, body!.Value.GetProperty("status").GetInt32());
+    }
 }

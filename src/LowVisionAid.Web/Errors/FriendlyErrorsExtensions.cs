@@ -10,13 +10,13 @@ public static class FriendlyErrorsExtensions
     public static IServiceCollection AddFriendlyErrors(this IServiceCollection services) => services.AddProblemDetails();
 
     /// <summary>
-    /// Unknown addresses and records give the friendly "Page not found" page; a fault gives the "Something went
-    /// wrong" page. Requests under <c>/api</c> get ProblemDetails instead.
+    /// Unknown addresses and records give the friendly "Page not found" page (status-code pages). Requests under
+    /// <c>/api</c> get ProblemDetails instead, for faults too. Call it after Program.cs' own
+    /// <c>UseExceptionHandler("/Error")</c>, which shows people the "Something went wrong" page outside Development.
     /// </summary>
     public static WebApplication UseFriendlyErrors(this WebApplication app)
     {
         ArgumentNullException.ThrowIfNull(app);
-        var development = app.Environment.IsDevelopment();
 
         app.UseWhen(IsApi, api =>
         {
@@ -24,16 +24,7 @@ public static class FriendlyErrorsExtensions
             api.UseStatusCodePages();
         });
 
-        app.UseWhen(context => !IsApi(context), site =>
-        {
-            if (!development)
-            {
-                site.UseExceptionHandler("/Error");
-            }
-
-            site.UseStatusCodePagesWithReExecute("/Status/{0}");
-        });
-
+        app.UseWhen(context => !IsApi(context), site => site.UseStatusCodePagesWithReExecute("/Status/{0}"));
         return app;
     }
 

@@ -50,8 +50,9 @@ public sealed class AppServer : WebApplicationFactory<Program>
         builder.UseEnvironment("Testing");
         // Tells Program.cs an address is configured, so it does not claim the default port 5080.
         builder.UseSetting("urls", "http://127.0.0.1:0");
+        // The clinic's data folder (the web branch's ClinicDataSetup.DataFolderKey): this class's own SQLite file.
         builder.UseSetting("DataFolder", _dataFolder);
-        builder.UseSetting("ConnectionStrings:Clinic", $"Data Source={Path.Combine(_dataFolder, "clinic.db")}");
+        builder.ConfigureServices(services => services.AddSingleton<IStartupFilter, FaultInjection>());
     }
 
     protected override void Dispose(bool disposing)
