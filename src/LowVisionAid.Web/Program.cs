@@ -1,4 +1,3 @@
-using LowVisionAid.Web.Errors;
 
 var builder = WebApplication.CreateBuilder(args);
 
@@ -11,6 +10,7 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
 builder.Services.AddRazorPages();
 
 builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
+builder.Services.AddCalculationApi();       // JSON API for plans and conversions, OpenAPI at /openapi/v1.json
 
 var app = builder.Build();
 
@@ -23,5 +23,6 @@ app.UseFriendlyErrors();                    // not-found page for people, Proble
 app.UseStaticFiles();
 app.UseRouting();
 app.MapRazorPages();
+app.MapCalculationApi();
 
 await app.RunAsync().ConfigureAwait(false);
