@@ -1,4 +1,3 @@
-
 var builder = WebApplication.CreateBuilder(args);
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
