@@ -30,6 +30,26 @@ public static class CalculationApi
     {
         ArgumentNullException.ThrowIfNull(app);
         app.MapOpenApi();
+
+        var api = app.MapGroup("/api");
+
+        var convert = api.MapGroup("/convert").WithTags("Conversions");
+        convert.MapGet("/acuity", ([AsParameters] ConversionQuery q) => Conversions.Acuity(q.Value))
+            .WithName("ConvertAcuity").WithSummary("A distance acuity (6/60, 20/200, 0.1 decimal, logMAR 1.0, VAS 50) in every notation")
+            .Produces<AcuityConversion>().ProducesValidationProblem();
+        convert.MapGet("/print-size", ([AsParameters] ConversionQuery q) => Conversions.PrintSize(q.Value))
+            .WithName("ConvertPrintSize").WithSummary("A print size (1M, N8, 12 pt, 1.5 mm) in M units, x-height and approximate points")
+            .Produces<PrintSizeConversion>().ProducesValidationProblem();
+        convert.MapGet("/near-acuity", ([AsParameters] ConversionQuery q) => Conversions.NearAcuity(q.Value))
+            .WithName("ConvertNearAcuity").WithSummary("A near acuity (4M at 40 cm, N8 at 25 cm, 0.40/1.0M) and the logMAR it implies")
+            .Produces<NearAcuityConversion>().ProducesValidationProblem();
+        convert.MapGet("/distance", ([AsParameters] ConversionQuery q) => Conversions.Distance(q.Value))
+            .WithName("ConvertDistance").WithSummary("A distance (25 cm, 0.4 m, 10 in) in metres, centimetres and inches")
+            .Produces<DistanceConversion>().ProducesValidationProblem();
         return app;
     }
+
+    /// <summary>The text to convert.</summary>
+    /// <param name="Value">What was typed, e.g. "6/60".</param>
+    internal sealed record ConversionQuery(string? Value);
 }
