@@ -47,6 +47,25 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         Assert.True(fontSize >= 18, $"Body text is {fontSize} CSS px; it should be at least 18 before zoom.");
     }
 
+    [Fact]
+    public async Task The_navigation_marks_the_current_section_for_screen_readers_and_by_more_than_colour()
+    {
+        // Arrange
+        var chrome = new SiteChrome(Page);
+
+        // Act
+        await Page.GotoAsync("");
+
+        // Assert: aria-current on Home only, and a bar under it (a border, not a colour change).
+        await Assertions.Expect(chrome.NavigationLink("Home")).ToHaveAttributeAsync("aria-current", "page");
+        await Assertions.Expect(chrome.Navigation.Locator("[aria-current]")).ToHaveCountAsync(1);
+        var bar = await chrome.NavigationLink("Home").EvaluateAsync<string>("a => getComputedStyle(a).borderBottomStyle");
+        Assert.Equal("solid", bar);
+
+        await Page.GotoAsync("Display");
+        await Assertions.Expect(chrome.Navigation.Locator("[aria-current]")).ToHaveCountAsync(0);
+    }
+
     private static async Task AssertEveryNavigationLinkFitsAsync(IPage page, SiteChrome chrome, int width)
     {
         var links = await chrome.Navigation.GetByRole(AriaRole.Link).AllAsync();
