@@ -41,4 +41,35 @@ public sealed class AccessibilityScanTests(BrowserSession browser, AppServer app
         await Artifacts.ScreenshotAsync(Page, "scan-display-error");
         await AxeScan.AssertNoViolationsAsync(Page, "/Display with an error");
     }
+
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public async Task The_calculator_with_a_plan_and_with_errors_passes_the_axe_scan(bool highContrast)
+    {
+        // Arrange
+        await SitePages.UseDisplayAsync(Context, App.BaseAddress, highContrast, largeText: false);
+        var calculator = new CalculatorPage(Page);
+        var scheme = highContrast ? "contrast" : "standard";
+
+        // Act and assert: the form sent with mistakes ...
+        await calculator.GotoAsync();
+        await calculator.FillAsync(distanceAcuity: "6/0", workingDistance: "far");
+        await calculator.Submit.ClickAsync();
+        await Assertions.Expect(calculator.ErrorSummary).ToBeVisibleAsync();
+        await Artifacts.ScreenshotAsync(Page, $"scan-calculator-errors-{scheme}");
+        await AxeScan.AssertNoViolationsAsync(Page, $"/Calculator with errors ({scheme})");
+
+        // ... and with a plan, its flag and its option details open.
+        await calculator.FillAsync(distanceAcuity: "6/60", nearAcuity: "4M at 20 cm", targetPrint: "1M", workingDistance: "25 cm");
+        await calculator.Submit.ClickAsync();
+        await Assertions.Expect(calculator.Flag).ToBeVisibleAsync();
+        foreach (var summary in await Page.Locator("details > summary").AllAsync())
+        {
+            await summary.ClickAsync();
+        }
+
+        await Artifacts.ScreenshotAsync(Page, $"scan-calculator-plan-{scheme}");
+        await AxeScan.AssertNoViolationsAsync(Page, $"/Calculator with a plan ({scheme})");
+    }
 }

@@ -1,4 +1,5 @@
 using System.Net;
+using System.Net.Http.Json;
 using System.Text.Json;
 using LowVisionAid.Browser.Tests.Infrastructure;
 using LowVisionAid.Optics.Notation;
@@ -29,7 +30,7 @@ public sealed class CalculationApiTests(AppServer app) : IClassFixture<AppServer
         var paths = root.GetProperty("paths").EnumerateObject().Select(p => p.Name).ToHashSet(StringComparer.Ordinal);
         Assert.Superset(new HashSet<string>(StringComparer.Ordinal)
         {
-            "/api/convert/acuity", "/api/convert/print-size", "/api/convert/near-acuity", "/api/convert/distance",
+            "/api/plan", "/api/convert/acuity", "/api/convert/print-size", "/api/convert/near-acuity", "/api/convert/distance",
         }, paths);
     }
 
@@ -90,6 +91,57 @@ public sealed class CalculationApiTests(AppServer app) : IClassFixture<AppServer
         var expected = DistanceAcuityNotation.Parse("0.5", CultureInfo.InvariantCulture).Error;
         Assert.Equal(expected, problem.RootElement.GetProperty("errors").GetProperty("value")[0].GetString());
         Assert.Equal(400, problem.RootElement.GetProperty("status").GetInt32());
+    }
+
+    [Fact]
+    public async Task A_plan_for_Baileys_example_gives_15_6_D_and_ranked_options_with_their_cautions()
+    {
+        // Bailey, "Prescribing magnification" (methods §2.2): 4M at 32 cm, target 0.8M, no reserve → EVD 6.4 cm,
+        // Feq 15.625 D (published). Tolerance 1e-9 (exact arithmetic on the published inputs).
+        var request = new
+        {
+            nearAcuity = "4M at 32 cm",
+            targetPrint = "0.8M",
+            workingDistance = "25 cm",
+            reserve = "Spot",
+            task = "SustainedReading",
+        };
+
+        // Act
+        using var response = await _http.PostAsJsonAsync(new Uri("api/plan", UriKind.Relative), request);
+
+        // Assert
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        using var plan = JsonDocument.Parse(await response.Content.ReadAsStringAsync());
+        var root = plan.RootElement;
+        var near = root.GetProperty("estimates").EnumerateArray().Single(e => e.GetProperty("method").GetString() == "NearAcuity");
+        Assert.Equal(15.625, near.GetProperty("equivalentPowerDioptres").GetDouble(), 9);
+        Assert.Equal(6.4, near.GetProperty("equivalentViewingDistanceCm").GetDouble(), 9);
+        Assert.Equal(15.625, root.GetProperty("plannedForDioptres").GetDouble(), 9);
+        var options = root.GetProperty("options").EnumerateArray().ToList();
+        Assert.True(options.Count >= 5, $"Expected the options of a near task, got {options.Count}.");
+        Assert.Equal(Enumerable.Range(1, options.Count), options.Select(o => o.GetProperty("position").GetInt32()));
+        Assert.All(options, o => Assert.NotEmpty(o.GetProperty("reasons").EnumerateArray()));
+        var cautions = root.GetProperty("cautions").EnumerateArray().Select(c => c.GetProperty("id").GetString()).ToList();
+        Assert.Contains("starting-point", cautions);
+        Assert.Contains("referral", cautions);
+    }
+
+    [Fact]
+    public async Task A_plan_without_its_inputs_gives_a_validation_problem_naming_each_missing_field()
+    {
+        // Act
+        using var response = await _http.PostAsJsonAsync(new Uri("api/plan", UriKind.Relative), new { task = "SustainedReading", reserve = "Fluent" });
+
+        // Assert
+        Assert.Equal(HttpStatusCode.BadRequest, response.StatusCode);
+        Assert.Equal("application/problem+json", response.Content.Headers.ContentType?.MediaType);
+        using var problem = JsonDocument.Parse(await response.Content.ReadAsStringAsync());
+        var errors = problem.RootElement.GetProperty("errors");
+        Assert.Equal(
+            ["distanceAcuity", "targetPrint", "workingDistance"],
+            errors.EnumerateObject().Select(e => e.Name).Order(StringComparer.Ordinal));
+        Assert.StartsWith("Enter the distance the client wants to work at", errors.GetProperty("workingDistance")[0].GetString(), StringComparison.Ordinal);
     }
 
     private async Task<JsonElement> GetJsonAsync(string path)

@@ -66,6 +66,24 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         await Assertions.Expect(chrome.Navigation.Locator("[aria-current]")).ToHaveCountAsync(0);
     }
 
+    [Fact]
+    public async Task A_calculated_plan_reflows_at_320_css_pixels_with_large_text()
+    {
+        // Arrange
+        var page = await NewPageAsync(320, 256, highContrast: false, largeText: true);
+        var calculator = new CalculatorPage(page);
+        await calculator.GotoAsync();
+        await calculator.FillAsync(distanceAcuity: "6/60", nearAcuity: "4M at 20 cm", targetPrint: "1M", workingDistance: "25 cm");
+
+        // Act
+        await calculator.Submit.ClickAsync();
+
+        // Assert
+        await Assertions.Expect(calculator.Flag).ToBeVisibleAsync();
+        await Artifacts.ScreenshotAsync(page, "reflow-320-calculator-plan");
+        Assert.False(await new SiteChrome(page).ScrollsSidewaysAsync(), "The calculator's plan scrolls sideways at 320 CSS px.");
+    }
+
     private static async Task AssertEveryNavigationLinkFitsAsync(IPage page, SiteChrome chrome, int width)
     {
         var links = await chrome.Navigation.GetByRole(AriaRole.Link).AllAsync();

@@ -1,4 +1,8 @@
+using System.Globalization;
+using System.Text.Json;
 using System.Text.Json.Serialization;
+using LowVisionAid.Web.Calculator;
+using Microsoft.AspNetCore.Http.HttpResults;
 
 namespace LowVisionAid.Web.Api;
 
@@ -13,6 +17,7 @@ public static class CalculationApi
 
     public static IServiceCollection AddCalculationApi(this IServiceCollection services)
     {
+        services.AddSingleton<QuickPlanHandler>();
         services.AddOpenApi(options => options.AddDocumentTransformer((document, _, _) =>
         {
             document.Info.Title = Title;
@@ -33,6 +38,12 @@ public static class CalculationApi
 
         var api = app.MapGroup("/api");
 
+        api.MapPost("/plan", Plan)
+            .WithName("Plan")
+            .WithTags("Plan")
+            .WithSummary("A starting magnifier plan from typed measurements")
+            .WithDescription("Every field is text as a clinician would type it (\"6/60\", \"4M at 40 cm\", \"25 cm\"). The result holds each input as understood, the required power by each method with any disagreement flagged, the ranked options with every figure, and the cautions.");
+
         var convert = api.MapGroup("/convert").WithTags("Conversions");
         convert.MapGet("/acuity", ([AsParameters] ConversionQuery q) => Conversions.Acuity(q.Value))
             .WithName("ConvertAcuity").WithSummary("A distance acuity (6/60, 20/200, 0.1 decimal, logMAR 1.0, VAS 50) in every notation")
@@ -47,6 +58,22 @@ public static class CalculationApi
             .WithName("ConvertDistance").WithSummary("A distance (25 cm, 0.4 m, 10 in) in metres, centimetres and inches")
             .Produces<DistanceConversion>().ProducesValidationProblem();
         return app;
+    }
+
+    private static Results<Ok<QuickPlanView>, ValidationProblem> Plan(QuickPlanInput input, QuickPlanHandler handler)
+    {
+        var outcome = handler.Handle(input, CultureInfo.InvariantCulture);
+        if (outcome.Plan is { } plan)
+        {
+            return TypedResults.Ok(plan);
+        }
+
+        // Keys are the JSON property names of the request ("distanceAcuity"), or "" for the request as a whole.
+        var errors = outcome.Errors.ToDictionary(
+            e => JsonNamingPolicy.CamelCase.ConvertName(e.Key),
+            e => new[] { e.Value },
+            StringComparer.Ordinal);
+        return TypedResults.ValidationProblem(errors, title: "The plan could not be worked out from these inputs.");
     }
 
     /// <summary>The text to convert.</summary>

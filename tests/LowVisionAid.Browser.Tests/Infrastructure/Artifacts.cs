@@ -11,12 +11,12 @@ public static class Artifacts
     });
 
     /// <summary>Saves a full-page screenshot under a readable name and returns its path.</summary>
-    public static async Task<string> ScreenshotAsync(IPage page, string name)
+    public static async Task<string> ScreenshotAsync(IPage page, string name, bool fullPage = true)
     {
         ArgumentNullException.ThrowIfNull(page);
         var safe = string.Concat(name.Select(c => char.IsLetterOrDigit(c) || c is '-' or '_' ? c : '-'));
         var path = Path.Combine(Screenshots.Value, safe + ".png");
-        await page.ScreenshotAsync(new PageScreenshotOptions { Path = path, FullPage = true });
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = path, FullPage = fullPage });
         return path;
     }
 

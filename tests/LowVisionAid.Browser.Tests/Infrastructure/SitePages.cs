@@ -8,6 +8,7 @@ public static class SitePages
     [
         ("", "LowVisionAid"),
         ("Display", "Display settings"),
+        ("Calculator", "Quick calculator"),
         ("no-such-page", "Page not found"),
     ];
 
