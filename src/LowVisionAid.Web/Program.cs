@@ -1,3 +1,5 @@
+using LowVisionAid.Web.Infrastructure;
+
 var builder = WebApplication.CreateBuilder(args);
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
@@ -6,12 +8,15 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
     builder.WebHost.UseUrls("http://127.0.0.1:5080");
 }
 
+builder.AddClinicData();                    // SQLite file in the data folder, migrations from LowVisionAid.Migrations
+builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
 builder.Services.AddRazorPages();
 
 builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
 builder.Services.AddCalculationApi();       // JSON API for plans and conversions, OpenAPI at /openapi/v1.json
 
 var app = builder.Build();
+await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 
 if (!app.Environment.IsDevelopment())
 {

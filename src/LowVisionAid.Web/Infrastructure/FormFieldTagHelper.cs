@@ -1,0 +1,216 @@
+using Microsoft.AspNetCore.Mvc.ModelBinding;
+using Microsoft.AspNetCore.Mvc.Rendering;
+using Microsoft.AspNetCore.Mvc.ViewFeatures;
+using Microsoft.AspNetCore.Razor.TagHelpers;
+
+namespace LowVisionAid.Web.Infrastructure;
+
+/// <summary>
+/// One form field with its label, optional hint and the error beside it, tied together with
+/// <c>aria-describedby</c>. The value shown is what the user typed (from model state) when the form comes back with errors.
+/// <code>&lt;form-field asp-for="Input.Code" label="Client code" hint="The clinic's own code, e.g. HB-0042" /&gt;</code>
+/// </summary>
+[HtmlTargetElement("form-field", Attributes = "asp-for", TagStructure = TagStructure.WithoutEndTag)]
+public sealed class FormFieldTagHelper(IHtmlGenerator generator) : TagHelper
+{
+    [HtmlAttributeName("asp-for")]
+    public ModelExpression For { get; set; } = null!;
+
+    [HtmlAttributeName("asp-items")]
+    public IEnumerable<SelectListItem>? Items { get; set; }
+
+    public string Label { get; set; } = "";
+
+    public string? Hint { get; set; }
+
+    /// <summary>text (default), textarea, select, checkbox, date or number.</summary>
+    public string Kind { get; set; } = "text";
+
+    public string? Autocomplete { get; set; }
+
+    public string? Inputmode { get; set; }
+
+    /// <summary>Suggestions offered as the user types (a <c>datalist</c> id on the page).</summary>
+    public string? List { get; set; }
+
+    [ViewContext]
+    [HtmlAttributeNotBound]
+    public ViewContext ViewContext { get; set; } = null!;
+
+    public override void Process(TagHelperContext context, TagHelperOutput output)
+    {
+        ArgumentNullException.ThrowIfNull(output);
+        var fullName = ViewContext.ViewData.TemplateInfo.GetFullHtmlFieldName(For.Name);
+        var id = TagBuilder.CreateSanitizedId(fullName, generator.IdAttributeDotReplacement);
+        var errors = ViewContext.ViewData.ModelState.TryGetValue(fullName, out var entry) ? entry.Errors : [];
+        var hintId = id + "-hint";
+        var errorId = id + "-error";
+
+        var describedBy = new List<string>();
+        if (!string.IsNullOrEmpty(Hint))
+        {
+            describedBy.Add(hintId);
+        }
+
+        if (errors.Count > 0)
+        {
+            describedBy.Add(errorId);
+        }
+
+        var attributes = new Dictionary<string, object?>(StringComparer.Ordinal);
+        if (describedBy.Count > 0)
+        {
+            attributes["aria-describedby"] = string.Join(' ', describedBy);
+        }
+
+        if (errors.Count > 0)
+        {
+            attributes["aria-invalid"] = "true";
+        }
+
+        if (Autocomplete is not null)
+        {
+            attributes["autocomplete"] = Autocomplete;
+        }
+
+        if (Inputmode is not null)
+        {
+            attributes["inputmode"] = Inputmode;
+        }
+
+        if (List is not null)
+        {
+            attributes["list"] = List;
+        }
+
+        output.TagName = "div";
+        output.TagMode = TagMode.StartTagAndEndTag;
+        output.Attributes.SetAttribute("class", errors.Count > 0 ? $"field field-{Kind} field-invalid" : $"field field-{Kind}");
+
+        var label = new TagBuilder("label");
+        label.Attributes["for"] = id;
+        label.InnerHtml.Append(Label);
+
+        var control = Kind switch
+        {
+            "textarea" => generator.GenerateTextArea(ViewContext, For.ModelExplorer, For.Name, rows: 4, columns: 0, attributes),
+            "select" => generator.GenerateSelect(ViewContext, For.ModelExplorer, optionLabel: null, For.Name, Items ?? [], allowMultiple: false, attributes),
+            "checkbox" => generator.GenerateCheckBox(ViewContext, For.ModelExplorer, For.Name, isChecked: null, attributes),
+            _ => TextBox(attributes),
+        };
+
+        var content = output.Content;
+        if (Kind == "checkbox")
+        {
+            content.AppendHtml(control);
+            content.AppendHtml(generator.GenerateHiddenForCheckbox(ViewContext, For.ModelExplorer, For.Name));
+            content.AppendHtml(label);
+        }
+        else
+        {
+            content.AppendHtml(label);
+        }
+
+        if (!string.IsNullOrEmpty(Hint))
+        {
+            var hint = new TagBuilder("p");
+            hint.Attributes["id"] = hintId;
+            hint.AddCssClass("field-hint");
+            hint.InnerHtml.Append(Hint);
+            content.AppendHtml(hint);
+        }
+
+        if (errors.Count > 0)
+        {
+            var error = new TagBuilder("p");
+            error.Attributes["id"] = errorId;
+            error.AddCssClass("field-error");
+            var prefix = new TagBuilder("span");
+            prefix.AddCssClass("visually-hidden");
+            prefix.InnerHtml.Append("Error: ");
+            error.InnerHtml.AppendHtml(prefix);
+            error.InnerHtml.Append(string.Join(' ', errors.Select(e => e.ErrorMessage)));
+            content.AppendHtml(error);
+        }
+
+        if (Kind != "checkbox")
+        {
+            content.AppendHtml(control);
+        }
+    }
+
+    private TagBuilder TextBox(Dictionary<string, object?> attributes)
+    {
+        attributes["type"] = Kind switch
+        {
+            "date" => "date",
+            _ => "text",
+        };
+        if (Kind == "number")
+        {
+            attributes.TryAdd("inputmode", "numeric");
+        }
+
+        attributes["spellcheck"] = "false";
+        return generator.GenerateTextBox(ViewContext, For.ModelExplorer, For.Name, value: null, format: null, attributes);
+    }
+}
+
+/// <summary>
+/// The summary of errors at the top of a form (<c>role="alert"</c>), each linking to its field. Renders nothing
+/// when the form has no errors.
+/// </summary>
+[HtmlTargetElement("error-summary", TagStructure = TagStructure.WithoutEndTag)]
+public sealed class ErrorSummaryTagHelper(IHtmlGenerator generator) : TagHelper
+{
+    [ViewContext]
+    [HtmlAttributeNotBound]
+    public ViewContext ViewContext { get; set; } = null!;
+
+    public override void Process(TagHelperContext context, TagHelperOutput output)
+    {
+        ArgumentNullException.ThrowIfNull(output);
+        var failures = ViewContext.ViewData.ModelState
+            .Where(kv => kv.Value is { ValidationState: ModelValidationState.Invalid })
+            .SelectMany(kv => kv.Value!.Errors.Select(e => (Key: kv.Key, e.ErrorMessage)))
+            .ToList();
+        if (failures.Count == 0)
+        {
+            output.SuppressOutput();
+            return;
+        }
+
+        output.TagName = "div";
+        output.TagMode = TagMode.StartTagAndEndTag;
+        output.Attributes.SetAttribute("class", "error-summary");
+        output.Attributes.SetAttribute("role", "alert");
+        output.Attributes.SetAttribute("aria-labelledby", "error-summary-title");
+        output.Attributes.SetAttribute("tabindex", "-1");
+
+        var title = new TagBuilder("h2");
+        title.Attributes["id"] = "error-summary-title";
+        title.InnerHtml.Append(failures.Count == 1 ? "There is 1 problem to fix" : $"There are {failures.Count} problems to fix");
+        output.Content.AppendHtml(title);
+
+        var list = new TagBuilder("ul");
+        foreach (var (key, message) in failures)
+        {
+            var item = new TagBuilder("li");
+            if (key.Contains('.', StringComparison.Ordinal))
+            {
+                var link = new TagBuilder("a");
+                link.Attributes["href"] = "#" + TagBuilder.CreateSanitizedId(key, generator.IdAttributeDotReplacement);
+                link.InnerHtml.Append(message);
+                item.InnerHtml.AppendHtml(link);
+            }
+            else
+            {
+                item.InnerHtml.Append(message);
+            }
+
+            list.InnerHtml.AppendHtml(item);
+        }
+
+        output.Content.AppendHtml(list);
+    }
+}

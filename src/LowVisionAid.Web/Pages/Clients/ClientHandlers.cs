@@ -1,0 +1,90 @@
+using LowVisionAid.Data;
+using LowVisionAid.Data.Entities;
+using Microsoft.EntityFrameworkCore;
+
+namespace LowVisionAid.Web.Pages.Clients;
+
+public sealed record ClientRow(int Id, string Code, string? Name, int? YearOfBirth, DateOnly? LastVisit, bool IsDemo);
+
+/// <summary>Clients whose code or name contains the search text, most recently seen first.</summary>
+public sealed class ClientListHandler(ClinicDbContext db)
+{
+    public const int PageSize = 200;
+
+    public async Task<IReadOnlyList<ClientRow>> HandleAsync(string? search, CancellationToken ct)
+    {
+        var query = db.Clients.AsNoTracking();
+        if (!string.IsNullOrWhiteSpace(search))
+        {
+            var pattern = "%" + search.Trim().Replace("\\", "\\\\", StringComparison.Ordinal).Replace("%", "\\%", StringComparison.Ordinal).Replace("_", "\\_", StringComparison.Ordinal) + "%";
+            query = query.Where(c => EF.Functions.Like(c.Code, pattern, "\\") || (c.Name != null && EF.Functions.Like(c.Name, pattern, "\\")));
+        }
+
+        return await query
+            .Select(c => new { Client = c, LastVisit = c.Visits.Max(v => (DateOnly?)v.VisitDate) })
+            .OrderByDescending(x => x.LastVisit).ThenBy(x => x.Client.Code)
+            .Take(PageSize)
+            .Select(x => new ClientRow(x.Client.Id, x.Client.Code, x.Client.Name, x.Client.YearOfBirth, x.LastVisit, x.Client.IsDemo))
+            .ToListAsync(ct).ConfigureAwait(false);
+    }
+}
+
+public sealed record NewClientResult(int? Id, string? CodeError);
+
+public sealed class NewClientHandler(ClinicDbContext db)
+{
+    public const string CodeTaken = "Another client already has this code. Type a different code, or search for that client.";
+
+    public async Task<NewClientResult> HandleAsync(ClientInput input, CancellationToken ct)
+    {
+        ArgumentNullException.ThrowIfNull(input);
+        var code = input.Code.Trim();
+        if (await db.Clients.AnyAsync(c => c.Code == code, ct).ConfigureAwait(false))
+        {
+            return new(null, CodeTaken);
+        }
+
+        var client = new Client
+        {
+            Code = code,
+            Name = Blank(input.Name),
+            YearOfBirth = input.ParsedYearOfBirth,
+            Notes = Blank(input.Notes),
+        };
+        db.Clients.Add(client);
+        await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        return new(client.Id, null);
+    }
+
+    internal static string? Blank(string? text) => string.IsNullOrWhiteSpace(text) ? null : text.Trim();
+}
+
+public sealed record ClientVisitRow(int Id, DateOnly Date, string? Practitioner, string? DistanceBoth, int Plans);
+
+public sealed record ClientTrialRow(int Id, int PlanId, DateOnly Date, string Device, TrialOutcome Outcome, DateOnly? FollowUpDue, DateOnly? FollowUpDone);
+
+public sealed record ClientView(
+    int Id, string Code, string? Name, int? YearOfBirth, string? Notes, bool IsDemo,
+    IReadOnlyList<ClientVisitRow> Visits, IReadOnlyList<ClientTrialRow> Trials);
+
+public sealed class ClientDetailsHandler(ClinicDbContext db)
+{
+    public async Task<ClientView?> HandleAsync(int id, CancellationToken ct)
+    {
+        var client = await db.Clients.AsNoTracking().FirstOrDefaultAsync(c => c.Id == id, ct).ConfigureAwait(false);
+        if (client is null)
+        {
+            return null;
+        }
+
+        var visits = await db.Visits.AsNoTracking().Where(v => v.ClientId == id)
+            .OrderByDescending(v => v.VisitDate).ThenByDescending(v => v.Id)
+            .Select(v => new ClientVisitRow(v.Id, v.VisitDate, v.Practitioner, v.DistanceBothText, v.Plans.Count))
+            .ToListAsync(ct).ConfigureAwait(false);
+        var trials = await db.Trials.AsNoTracking().Where(t => t.Plan!.Visit!.ClientId == id)
+            .OrderByDescending(t => t.TrialDate).ThenByDescending(t => t.Id)
+            .Select(t => new ClientTrialRow(t.Id, t.PlanId, t.TrialDate, t.DeviceDescription, t.Outcome, t.FollowUpDue, t.FollowUpDone))
+            .ToListAsync(ct).ConfigureAwait(false);
+        return new(client.Id, client.Code, client.Name, client.YearOfBirth, client.Notes, client.IsDemo, visits, trials);
+    }
+}
