@@ -11,6 +11,9 @@ public sealed class ErrorPageTests(BrowserSession browser, AppServer app) : Brow
     [InlineData("no-such-page")]
     [InlineData("Calculator/nothing/here")]
     [InlineData("css/missing.css")]
+    [InlineData("Clients/999999")]
+    [InlineData("Plans/999999")]
+    [InlineData("Visits/999999")]
     public async Task An_unknown_address_gives_the_friendly_not_found_page_with_status_404(string path)
     {
         // Act

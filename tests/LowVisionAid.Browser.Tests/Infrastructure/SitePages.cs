@@ -9,6 +9,19 @@ public static class SitePages
         ("", "LowVisionAid"),
         ("Display", "Display settings"),
         ("Calculator", "Quick calculator"),
+        // The clinic pages, on the demo clinic loaded into each test class's own empty database.
+        ("Clients", "Clients"),
+        ("Clients/New", "Add a client"),
+        ("Clients/1", "Client DEMO-01"),
+        ("Visits/New?clientId=1", "Record a visit for DEMO-01"),
+        ("Visits/1", "Visit of 10 Nov 2026 for DEMO-01"),
+        ("Visits/1/Edit", "Edit visit for DEMO-01"),
+        ("Plans/1", "Plan for DEMO-01"),
+        ("Trials/New?planId=1", "Record a trial for DEMO-01"),
+        ("FollowUps", "Follow-ups due"),
+        ("Kit", "Trial kit"),
+        ("Kit/New", "Add a device to the kit"),
+        ("Settings", "Settings"),
         ("no-such-page", "Page not found"),
     ];
 
