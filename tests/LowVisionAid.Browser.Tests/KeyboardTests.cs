@@ -26,7 +26,7 @@ public sealed class KeyboardTests(BrowserSession browser, AppServer app) : Brows
         // Arrange
         var chrome = new SiteChrome(Page);
         await Page.GotoAsync(path);
-        await Assertions.Expect(chrome.Heading).ToHaveTextAsync(heading);
+        await Assertions.Expect(chrome.Heading).ToHaveTextAsync(SitePages.HeadingPattern(heading));
 
         // Act
         await Page.Keyboard.PressAsync("Tab");
