@@ -12,6 +12,9 @@ builder.AddClinicData();                    // SQLite file in the data folder, m
 builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
 builder.Services.AddRazorPages();
 
+builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
+builder.Services.AddCalculationApi();       // JSON API for plans and conversions, OpenAPI at /openapi/v1.json
+
 var app = builder.Build();
 await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 
@@ -20,8 +23,10 @@ if (!app.Environment.IsDevelopment())
     app.UseExceptionHandler("/Error");
 }
 
+app.UseFriendlyErrors();                    // not-found page for people, ProblemDetails under /api
 app.UseStaticFiles();
 app.UseRouting();
 app.MapRazorPages();
+app.MapCalculationApi();
 
 await app.RunAsync().ConfigureAwait(false);
