@@ -1,4 +1,5 @@
 using LowVisionAid.Web.Infrastructure;
+using LowVisionAid.Web.Security;
 
 var builder = WebApplication.CreateBuilder(args);
 
@@ -10,6 +11,7 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
 
 builder.AddClinicData();     // SQLite file in the data folder, migrations from LowVisionAid.Migrations
 builder.AddClinicPages();    // Razor Pages, validators and the clinic-flow handlers
+builder.AddClinicSecurity(); // loopback unless Access:AllowLan, sign-in and roles, audit trail, backups
 
 var app = builder.Build();
 
@@ -18,9 +20,12 @@ if (!app.Environment.IsDevelopment())
     app.UseExceptionHandler("/Error");
 }
 
+app.UseClinicSecurityHeaders();   // other computers refused unless allowed; CSP and the other headers
 app.UseStaticFiles();
 app.UseRouting();
+app.UseClinicSignIn();             // authentication and authorization
 app.MapRazorPages();
 
+await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);  // backup before any migration, then users and audit schema
 await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 await app.RunAsync().ConfigureAwait(false);
