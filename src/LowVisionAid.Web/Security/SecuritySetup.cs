@@ -25,6 +25,7 @@ internal static class SecuritySetup
     {
         var settings = AccessSettings.From(builder.Configuration);
         NetworkExposure.Validate(builder.Configuration, settings);
+        builder.WebHost.ConfigureKestrel(o => o.AddServerHeader = false);
         var services = builder.Services;
         services.AddSingleton(settings);
         services.AddHttpContextAccessor();
