@@ -9,9 +9,8 @@ public sealed class DesignTimeContextFactory : IDesignTimeDbContextFactory<Clini
 {
     public ClinicDbContext CreateDbContext(string[] args)
     {
-        var options = new DbContextOptionsBuilder<ClinicDbContext>()
-            .UseSqlite("Data Source=design-time.db", sqlite => sqlite.MigrationsAssembly(ClinicDatabase.MigrationsAssembly))
-            .Options;
-        return new ClinicDbContext(options);
+        var options = new DbContextOptionsBuilder<ClinicDbContext>();
+        options.UseClinicSqlite("Data Source=design-time.db");
+        return new ClinicDbContext(options.Options);
     }
 }

@@ -1,4 +1,5 @@
 using Microsoft.Data.Sqlite;
+using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Data;
 
@@ -21,5 +22,12 @@ public static class ClinicDatabase
             Cache = SqliteCacheMode.Private,
             Pooling = true,
         }.ToString();
+    }
+
+    /// <summary>The one way the context is configured: SQLite, with the migrations from <see cref="MigrationsAssembly"/>.</summary>
+    public static DbContextOptionsBuilder UseClinicSqlite(this DbContextOptionsBuilder options, string connectionString)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        return options.UseSqlite(connectionString, sqlite => sqlite.MigrationsAssembly(MigrationsAssembly));
     }
 }

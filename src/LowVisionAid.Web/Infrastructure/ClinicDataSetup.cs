@@ -22,9 +22,7 @@ internal static class ClinicDataSetup
         var connectionString = ClinicDatabase.ConnectionStringFor(folder);
 
         builder.Services.AddSingleton(TimeProvider.System);
-        builder.Services.AddDbContext<ClinicDbContext>(options => options.UseSqlite(
-            connectionString,
-            sqlite => sqlite.MigrationsAssembly(ClinicDatabase.MigrationsAssembly)));
+        builder.Services.AddDbContext<ClinicDbContext>(options => options.UseClinicSqlite(connectionString));
         builder.Services.AddScoped<DemoClinic>();
         return builder;
     }

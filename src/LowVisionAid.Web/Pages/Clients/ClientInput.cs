@@ -25,7 +25,7 @@ public sealed class ClientInputValidator : AbstractValidator<ClientInput>
     public ClientInputValidator(TimeProvider clock)
     {
         ArgumentNullException.ThrowIfNull(clock);
-        RuleFor(c => c.Code)
+        RuleFor(c => c.Code).Cascade(CascadeMode.Stop)
             .NotEmpty().WithMessage("Type the clinic's code for this client, such as HB-0042.")
             .MaximumLength(FieldLimits.Code).WithMessage($"Keep the client code to {FieldLimits.Code} characters or fewer.")
             .Matches(@"^[\p{L}\p{N}][\p{L}\p{N} ._/-]*$").WithMessage("Use letters, digits, spaces, dots, dashes or slashes in the client code, such as HB-0042.");

@@ -1,0 +1,179 @@
+using System.Globalization;
+using FluentValidation;
+using LowVisionAid.Data;
+using LowVisionAid.Data.Entities;
+using LowVisionAid.Web.Infrastructure;
+
+namespace LowVisionAid.Web.Pages.Visits;
+
+/// <summary>The visit form as typed. Every measurement is a string, read by the optics core's parsers.</summary>
+public sealed class VisitInput
+{
+    public const int GoalRows = 4;
+    public const int ReadingSpeedRows = 4;
+
+    public string VisitDate { get; set; } = "";
+
+    public string? Practitioner { get; set; }
+
+    public string? DistanceRight { get; set; }
+
+    public string? DistanceLeft { get; set; }
+
+    public string? DistanceBoth { get; set; }
+
+    public string? NearThreshold { get; set; }
+
+    public string? NearTestDistance { get; set; }
+
+    public List<ReadingSpeedInput> ReadingSpeeds { get; set; } = [];
+
+    public string? ContrastSensitivity { get; set; }
+
+    public string? RefractionWorn { get; set; }
+
+    public string? AddWorn { get; set; }
+
+    public string? Accommodation { get; set; }
+
+    public string? WorkingDistance { get; set; }
+
+    public List<GoalInput> Goals { get; set; } = [];
+
+    public bool NeedsHandsFree { get; set; }
+
+    public bool HasTremor { get; set; }
+
+    public UsefulEyes UsefulEyes { get; set; }
+
+    public HomeLighting HomeLighting { get; set; }
+
+    public string? Notes { get; set; }
+
+    /// <summary>The visit's version when the form was opened (edits only).</summary>
+    public Guid Version { get; set; }
+
+    /// <summary>Pads the repeating rows so the form always offers the same number of empty lines.</summary>
+    public VisitInput WithBlankRows()
+    {
+        while (Goals.Count < GoalRows)
+        {
+            Goals.Add(new GoalInput());
+        }
+
+        while (ReadingSpeeds.Count < ReadingSpeedRows)
+        {
+            ReadingSpeeds.Add(new ReadingSpeedInput());
+        }
+
+        return this;
+    }
+
+    internal static bool TryDate(string? text, out DateOnly date) =>
+        DateOnly.TryParseExact(text?.Trim(), "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out date);
+}
+
+public sealed class GoalInput
+{
+    /// <summary>A <see cref="GoalTask"/> name, or empty for an unused row.</summary>
+    public string? Task { get; set; }
+
+    public string? Detail { get; set; }
+
+    public string? TargetPrint { get; set; }
+
+    public bool IsUsed => !string.IsNullOrWhiteSpace(Task) || !string.IsNullOrWhiteSpace(TargetPrint) || !string.IsNullOrWhiteSpace(Detail);
+}
+
+public sealed class ReadingSpeedInput
+{
+    public string? PrintSize { get; set; }
+
+    public string? WordsPerMinute { get; set; }
+
+    public bool IsUsed => !string.IsNullOrWhiteSpace(PrintSize) || !string.IsNullOrWhiteSpace(WordsPerMinute);
+}
+
+public sealed class VisitInputValidator : AbstractValidator<VisitInput>
+{
+    public const int MaximumWordsPerMinute = 1000;
+
+    public VisitInputValidator(TimeProvider clock)
+    {
+        ArgumentNullException.ThrowIfNull(clock);
+        RuleFor(v => v.VisitDate)
+            .Must(d => VisitInput.TryDate(d, out _)).WithMessage("Type the visit date as year-month-day, such as 2026-03-14.")
+            .Must(d => !VisitInput.TryDate(d, out var date) || date <= DateOnly.FromDateTime(clock.GetLocalNow().DateTime).AddDays(1))
+            .WithMessage("The visit date is in the future; type the date the client was seen, such as today's.");
+        RuleFor(v => v.Practitioner).MaximumLength(FieldLimits.Name).WithMessage($"Keep the practitioner's name to {FieldLimits.Name} characters or fewer.");
+
+        RuleFor(v => v.DistanceRight).Reads(Readings.Acuity);
+        RuleFor(v => v.DistanceLeft).Reads(Readings.Acuity);
+        RuleFor(v => v.DistanceBoth).Reads(Readings.Acuity);
+        RuleFor(v => v.NearThreshold).Reads(Readings.PrintSize);
+        RuleFor(v => v.NearTestDistance).Reads(Readings.Distance);
+        RuleFor(v => v.NearTestDistance)
+            .NotEmpty().When(v => !string.IsNullOrWhiteSpace(v.NearThreshold))
+            .WithMessage("Type the distance the near test was done at, such as 40 cm; near acuity means nothing without it.");
+        RuleFor(v => v.NearThreshold)
+            .NotEmpty().When(v => !string.IsNullOrWhiteSpace(v.NearTestDistance))
+            .WithMessage("Type the smallest print read at the test distance, such as 2.5M, or clear the test distance.");
+        RuleFor(v => v.ContrastSensitivity).Reads(Readings.LogContrastSensitivity);
+        RuleFor(v => v.RefractionWorn).MaximumLength(FieldLimits.Name).WithMessage($"Keep the refraction to {FieldLimits.Name} characters or fewer.");
+        RuleFor(v => v.AddWorn).Reads(Readings.Power);
+        RuleFor(v => v.Accommodation).Reads(Readings.Power);
+        RuleFor(v => v.WorkingDistance).Reads(Readings.Distance);
+        RuleFor(v => v.Notes).MaximumLength(FieldLimits.Notes).WithMessage($"Keep the notes to {FieldLimits.Notes} characters or fewer.");
+        RuleFor(v => v.UsefulEyes).IsInEnum().WithMessage("Choose which eyes are useful from the list.");
+        RuleFor(v => v.HomeLighting).IsInEnum().WithMessage("Choose the lighting at home from the list.");
+
+        RuleForEach(v => v.Goals).ChildRules(goal =>
+        {
+            goal.RuleFor(g => g.Task)
+                .Must(t => Enum.TryParse<GoalTask>(t, out _)).When(g => g.IsUsed)
+                .WithMessage("Choose the task from the list, such as Newspaper.");
+            goal.RuleFor(g => g.TargetPrint)
+                .NotEmpty().When(g => g.IsUsed)
+                .WithMessage("Type the print size this task needs, such as 1M for newspaper text.");
+            goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize);
+            goal.RuleFor(g => g.Detail).MaximumLength(FieldLimits.Name).WithMessage($"Keep the task detail to {FieldLimits.Name} characters or fewer.");
+        });
+
+        RuleForEach(v => v.ReadingSpeeds).ChildRules(speed =>
+        {
+            speed.RuleFor(s => s.PrintSize)
+                .NotEmpty().When(s => s.IsUsed)
+                .WithMessage("Type the print size this speed was measured at, such as 2M.");
+            speed.RuleFor(s => s.PrintSize).Reads(Readings.PrintSize);
+            speed.RuleFor(s => s.WordsPerMinute)
+                .Must(w => int.TryParse(w?.Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out var wpm) && wpm <= MaximumWordsPerMinute)
+                .When(s => s.IsUsed)
+                .WithMessage($"Type the reading speed as whole words per minute, from 0 to {MaximumWordsPerMinute}, such as 85.");
+        });
+    }
+}
+
+internal static class ReadsExtension
+{
+    /// <summary>An optional measurement: empty is fine; anything typed must be read by <paramref name="parse"/>, whose message is shown.</summary>
+    public static IRuleBuilderOptionsConditions<T, string?> Reads<T, TValue>(this IRuleBuilder<T, string?> rule, Func<string, Optics.Text.ParseResult<TValue>> parse) =>
+        rule.Custom((text, context) =>
+        {
+            if (string.IsNullOrWhiteSpace(text))
+            {
+                return;
+            }
+
+            if (text.Length > FieldLimits.Measurement)
+            {
+                context.AddFailure($"Keep this to {FieldLimits.Measurement} characters or fewer.");
+                return;
+            }
+
+            var result = parse(text);
+            if (!result.Success)
+            {
+                context.AddFailure(result.Error);
+            }
+        });
+}

@@ -1,0 +1,136 @@
+using System.Net;
+using LowVisionAid.Web.Pages.Visits;
+using LowVisionAid.Web.Tests.Support;
+using Microsoft.EntityFrameworkCore;
+
+namespace LowVisionAid.Web.Tests.Pages.Visits;
+
+public class VisitPagesTests
+{
+    [Fact]
+    public async Task A_new_visit_keeps_what_was_typed_beside_the_value_it_was_read_as()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-1");
+        using var browser = app.Browser();
+
+        var response = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", Records.VisitForm());
+
+        Assert.Equal(HttpStatusCode.Redirect, response.StatusCode);
+        var visit = await app.WithDbAsync(db => db.Visits.Include(v => v.Goals).Include(v => v.ReadingSpeeds).SingleAsync());
+        Assert.Equal($"/Visits/{visit.Id}", response.Headers.Location?.OriginalString);
+        Assert.Equal("6/60", visit.DistanceRightText);
+        // 6/60 is logMAR 1.0 and 20/400 is logMAR 1.3 (methods.md §1.1 table, Bailey and Lovie 1976); tolerance 1e-9.
+        Assert.Equal(1.0, visit.DistanceRight!.Value.LogMar, 9);
+        Assert.Equal(1.30103, visit.DistanceLeft!.Value.LogMar, 5);
+        Assert.Equal(0.40, visit.NearTestDistance!.Value.Metres, 9);
+        Assert.Equal(4.0, visit.NearThreshold!.Value.M, 9);
+        var goal = Assert.Single(visit.Goals);
+        Assert.Equal("1M", goal.TargetPrintText);
+        Assert.Equal(90, Assert.Single(visit.ReadingSpeeds).WordsPerMinute);
+    }
+
+    [Fact]
+    public async Task The_visit_page_shows_each_acuity_as_read_with_its_logMAR()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-2");
+        using var browser = app.Browser();
+        var saved = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", Records.VisitForm());
+
+        var html = await browser.GetStringAsync(saved.Headers.Location);
+
+        // 4M at 40 cm is logMAR log10(4/0.4) = 1.00 (Colenbrander 2001, M/d; derived).
+        Assert.Contains("<td>4M at 40 cm</td>", html, StringComparison.Ordinal);
+        Assert.Contains("<td>1.00</td>", html, StringComparison.Ordinal);
+        Assert.Contains("6/120", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Checking_the_readings_shows_them_and_saves_nothing()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-3");
+        using var browser = app.Browser();
+
+        var response = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", Records.VisitForm(), $"/Visits/New?clientId={clientId}&handler=Check");
+
+        var html = await response.Content.ReadAsStringAsync();
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        Assert.Contains("How the measurements were read", html, StringComparison.Ordinal);
+        Assert.Equal(0, await app.WithDbAsync(db => db.Visits.CountAsync()));
+    }
+
+    [Fact]
+    public async Task A_mistyped_acuity_is_refused_beside_its_field_and_the_typing_is_kept()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-4");
+        using var browser = app.Browser();
+        var form = Records.VisitForm();
+        form["Input.DistanceRight"] = "6//60";
+        form["Input.Goals[1].Task"] = "Phone";
+
+        var response = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", form);
+
+        var html = await response.Content.ReadAsStringAsync();
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        Assert.Contains("<a href=\"#Input_DistanceRight\">", html, StringComparison.Ordinal);
+        Assert.Contains("id=\"Input_DistanceRight-error\"", html, StringComparison.Ordinal);
+        Assert.Contains("value=\"6//60\"", html, StringComparison.Ordinal);
+        Assert.Contains("<a href=\"#Input_Goals_1__TargetPrint\">", html, StringComparison.Ordinal);
+        Assert.Equal(0, await app.WithDbAsync(db => db.Visits.CountAsync()));
+    }
+
+    [Fact]
+    public async Task The_second_of_two_editors_is_told_and_keeps_what_they_typed()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-5");
+        using var first = app.Browser();
+        using var second = app.Browser();
+        var created = await first.SubmitAsync($"/Visits/New?clientId={clientId}", Records.VisitForm());
+        var editUrl = created.Headers.Location!.OriginalString + "/Edit";
+
+        // Arrange: both open the edit form before either saves.
+        var firstPage = await first.GetStringAsync(new Uri(editUrl, UriKind.Relative));
+        var secondPage = await second.GetStringAsync(new Uri(editUrl, UriKind.Relative));
+        var firstEdit = Records.VisitForm();
+        firstEdit["Input.Practitioner"] = "First editor";
+        var secondEdit = Records.VisitForm();
+        secondEdit["Input.Practitioner"] = "Second editor";
+        secondEdit["Input.Notes"] = "Typed by the second editor";
+
+        // Act
+        var firstSave = await first.PostFormAsync(editUrl, firstPage, firstEdit);
+        var secondSave = await second.PostFormAsync(editUrl, secondPage, secondEdit);
+
+        // Assert: the first save stands, the second is told, and its typing is still in the form.
+        Assert.Equal(HttpStatusCode.Redirect, firstSave.StatusCode);
+        Assert.Equal(HttpStatusCode.OK, secondSave.StatusCode);
+        var conflictPage = await secondSave.Content.ReadAsStringAsync();
+        Assert.Contains(WebUtility.HtmlEncode(EditModel.ConflictMessage), conflictPage, StringComparison.Ordinal);
+        Assert.Contains("value=\"Second editor\"", conflictPage, StringComparison.Ordinal);
+        Assert.Contains("Typed by the second editor", conflictPage, StringComparison.Ordinal);
+        Assert.Equal("First editor", await app.WithDbAsync(db => db.Visits.Select(v => v.Practitioner).SingleAsync()));
+
+        // Act again: saving from the conflict page deliberately keeps the second version.
+        var retry = await second.PostFormAsync(editUrl, conflictPage, secondEdit);
+        Assert.Equal(HttpStatusCode.Redirect, retry.StatusCode);
+        Assert.Equal("Second editor", await app.WithDbAsync(db => db.Visits.Select(v => v.Practitioner).SingleAsync()));
+    }
+
+    [Theory]
+    [InlineData("/Visits/9999")]
+    [InlineData("/Visits/9999/Edit")]
+    [InlineData("/Visits/New?clientId=9999")]
+    public async Task Unknown_ids_are_not_found(string url)
+    {
+        using var app = new ClinicApp();
+        using var browser = app.Browser();
+
+        var response = await browser.GetAsync(new Uri(url, UriKind.Relative));
+
+        Assert.Equal(HttpStatusCode.NotFound, response.StatusCode);
+    }
+}

@@ -1,0 +1,36 @@
+using LowVisionAid.Data.Entities;
+
+namespace LowVisionAid.Web.Tests.Support;
+
+/// <summary>Makes the records a test needs, directly in its own database.</summary>
+public static class Records
+{
+    public static Task<int> ClientAsync(this ClinicApp app, string code) =>
+        app.WithDbAsync(async db =>
+        {
+            var client = new Client { Code = code };
+            db.Clients.Add(client);
+            await db.SaveChangesAsync();
+            return client.Id;
+        });
+
+    /// <summary>The fields of a complete visit form: a client reading 4M at 40 cm who wants newspaper print.</summary>
+    public static Dictionary<string, string> VisitForm(string date = "2026-11-20") => new()
+    {
+        ["Input.VisitDate"] = date,
+        ["Input.Practitioner"] = "Test practitioner",
+        ["Input.DistanceRight"] = "6/60",
+        ["Input.DistanceLeft"] = "20/400",
+        ["Input.DistanceBoth"] = "0.1",
+        ["Input.NearThreshold"] = "4M",
+        ["Input.NearTestDistance"] = "40 cm",
+        ["Input.AddWorn"] = "+2.50",
+        ["Input.WorkingDistance"] = "25 cm",
+        ["Input.Goals[0].Task"] = "Newspaper",
+        ["Input.Goals[0].TargetPrint"] = "1M",
+        ["Input.ReadingSpeeds[0].PrintSize"] = "8M",
+        ["Input.ReadingSpeeds[0].WordsPerMinute"] = "90",
+        ["Input.UsefulEyes"] = "Both",
+        ["Input.HomeLighting"] = "Dim",
+    };
+}
