@@ -11,6 +11,7 @@ namespace LowVisionAid.Reliability.Tests.Support;
 public sealed class AppProcess : IDisposable
 {
     private readonly Process _process;
+    private bool _disposed;
 
     private AppProcess(Process process, Uri address)
     {
@@ -118,6 +119,11 @@ public sealed class AppProcess : IDisposable
     /// <summary>SIGKILL: no shutdown code runs, as when the power goes or the process is killed.</summary>
     public void Kill()
     {
+        if (_disposed)
+        {
+            return;
+        }
+
         if (!_process.HasExited)
         {
             _process.Kill(entireProcessTree: true);
@@ -129,6 +135,7 @@ public sealed class AppProcess : IDisposable
     public void Dispose()
     {
         Kill();
+        _disposed = true;
         _process.Dispose();
     }
 }
