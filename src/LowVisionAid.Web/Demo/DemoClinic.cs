@@ -9,7 +9,7 @@ namespace LowVisionAid.Web.Demo;
 /// An invented clinic, so that a newcomer lands in a working app. Every person and figure here is made up;
 /// the records are marked as demo and Settings removes them.
 /// </summary>
-internal sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
+public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
 {
     public const string ClinicName = "Harbour Lane Low Vision Clinic (demo)";
 
@@ -44,7 +44,7 @@ internal sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
         await db.SaveChangesAsync(ct).ConfigureAwait(false);
     }
 
-    internal static ClinicSettings DefaultSettings(string name, bool hasDemoData) => new()
+    public static ClinicSettings DefaultSettings(string name, bool hasDemoData) => new()
     {
         ClinicName = name,
         ClinicContact = hasDemoData ? "1 Harbour Lane, Port Example · 000 0000 0000 (invented)" : null,

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
+using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Optics.Text;
 
@@ -13,66 +14,23 @@ internal static partial class Readings
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 
-    // Interim until the notation parsers reach main: Snellen fractions, decimal and logMAR only.
-    public static ParseResult<Acuity> Acuity(string text)
+    /// <summary>A distance acuity in any notation the core reads (6/60, 20/200, 0.1 decimal, 1.0 logMAR, VAS, letters).</summary>
+    public static ParseResult<Acuity> Acuity(string text) => DistanceAcuityNotation.Parse(text, Invariant);
+
+    /// <summary>A print size in M, N, points, Jaeger (with a warning) or millimetres of x-height.</summary>
+    public static ParseResult<PrintSize> PrintSize(string text) => PrintSizeNotation.Parse(text, Invariant);
+
+    /// <summary>A distance with its unit (cm, m, mm, in, ft).</summary>
+    public static ParseResult<Distance> Distance(string text) => DistanceNotation.Parse(text, Invariant);
+
+    /// <summary>Near acuity from its two parts, checked together (print size and test distance in range).</summary>
+    public static ParseResult<NearAcuity> NearAcuity(string threshold, string testDistance)
     {
-        var t = text.Trim();
-        var fraction = FractionPattern().Match(t);
-        if (fraction.Success && Number(fraction.Groups[1].Value) is { } num && Number(fraction.Groups[2].Value) is { } den && num > 0 && den > 0)
-        {
-            return Within(Optics.Quantities.Acuity.FromSnellen(num, den).LogMar);
-        }
-
-        var logMar = LogMarPattern().Match(t);
-        if (logMar.Success && Number(logMar.Groups["v"].Value) is { } l)
-        {
-            return Within(l);
-        }
-
-        return Number(t) is { } dec and > 0 and <= 10
-            ? Within(-Math.Log10(dec))
-            : ParseResult.Fail<Acuity>("Type an acuity such as 6/60, 20/200, 0.1 (decimal) or 1.0 logMAR.");
-    }
-
-    // Interim: M sizes and N sizes (N through the 1M ≈ N8 convention, marked approximate).
-    public static ParseResult<PrintSize> PrintSize(string text)
-    {
-        var t = text.Trim();
-        var m = MPattern().Match(t);
-        if (m.Success && Number(m.Groups[1].Value) is { } mValue and > 0 and <= 100)
-        {
-            return ParseResult.Ok(Optics.Quantities.PrintSize.FromM(mValue));
-        }
-
-        var n = NPattern().Match(t);
-        if (n.Success && Number(n.Groups[1].Value) is { } nValue and > 0 and <= 200)
-        {
-            return ParseResult.Ok(Optics.Quantities.PrintSize.FromN(nValue, XHeightRatio.Conventional), "N sizes are converted to M approximately (1M ≈ N8).");
-        }
-
-        return ParseResult.Fail<PrintSize>("Type a print size such as 1M, 2.5M or N12.");
-    }
-
-    // Interim: cm, m, mm and inches.
-    public static ParseResult<Distance> Distance(string text)
-    {
-        var match = DistancePattern().Match(text.Trim());
-        if (match.Success && Number(match.Groups[1].Value) is { } value and > 0)
-        {
-            var distance = match.Groups[2].Value.ToUpperInvariant() switch
-            {
-                "M" => Optics.Quantities.Distance.FromMetres(value),
-                "MM" => Optics.Quantities.Distance.FromMillimetres(value),
-                "IN" or "\"" => Optics.Quantities.Distance.FromInches(value),
-                _ => Optics.Quantities.Distance.FromCentimetres(value),
-            };
-            if (distance.Metres is > 0.01 and <= 10)
-            {
-                return ParseResult.Ok(distance);
-            }
-        }
-
-        return ParseResult.Fail<Distance>("Type a distance with its unit, such as 25 cm, 0.4 m or 16 in.");
+        var size = PrintSize(threshold);
+        var distance = Distance(testDistance);
+        return size.Success && distance.Success
+            ? NearAcuityNotation.FromMeasurement(size.Value, distance.Value)
+            : ParseResult.Fail<NearAcuity>(size.Error ?? distance.Error!);
     }
 
     /// <summary>A signed power in dioptres, e.g. "+2.50", "+4 D", "-1.25D".</summary>
@@ -93,27 +51,8 @@ internal static partial class Readings
             : ParseResult.Fail<double>("Type contrast sensitivity in log units between 0 and 2.4, such as 1.05 logCS.");
     }
 
-    private static ParseResult<Acuity> Within(double logMar) => logMar is >= Optics.Quantities.Acuity.BestLogMar and <= Optics.Quantities.Acuity.WorstLogMar
-        ? ParseResult.Ok(Optics.Quantities.Acuity.FromLogMar(logMar))
-        : ParseResult.Fail<Acuity>("That acuity is outside the charts (logMAR −0.5 to 3.0); check what you typed, such as 6/60 or 20/200.");
-
     private static double? Number(string text) =>
         double.TryParse(text.Replace(',', '.'), NumberStyles.Float, Invariant, out var value) && double.IsFinite(value) ? value : null;
-
-    [GeneratedRegex(@"^(\d+(?:[.,]\d+)?)\s*/\s*(\d+(?:[.,]\d+)?)$")]
-    private static partial Regex FractionPattern();
-
-    [GeneratedRegex(@"^(?:logMAR\s*(?<v>-?\d+(?:[.,]\d+)?)|(?<v>-?\d+(?:[.,]\d+)?)\s*logMAR)$", RegexOptions.IgnoreCase)]
-    private static partial Regex LogMarPattern();
-
-    [GeneratedRegex(@"^(\d+(?:[.,]\d+)?)\s*M$", RegexOptions.IgnoreCase)]
-    private static partial Regex MPattern();
-
-    [GeneratedRegex(@"^N\s*(\d+(?:[.,]\d+)?)$", RegexOptions.IgnoreCase)]
-    private static partial Regex NPattern();
-
-    [GeneratedRegex(@"^(\d+(?:[.,]\d+)?)\s*(cm|mm|m|in|"")$", RegexOptions.IgnoreCase)]
-    private static partial Regex DistancePattern();
 
     [GeneratedRegex(@"^([+-]?\d+(?:[.,]\d+)?)\s*(?:D|dioptres?|diopters?)?$", RegexOptions.IgnoreCase)]
     private static partial Regex PowerPattern();

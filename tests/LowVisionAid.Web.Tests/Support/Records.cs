@@ -14,6 +14,28 @@ public static class Records
             return client.Id;
         });
 
+    /// <summary>A client with one visit and a saved plan row (its figures are not read by these tests).</summary>
+    public static Task<(int ClientId, int PlanId)> PlanAsync(this ClinicApp app, string code) =>
+        app.WithDbAsync(async db =>
+        {
+            var client = new Client { Code = code };
+            var visit = new Visit { VisitDate = new DateOnly(2026, 11, 20) };
+            visit.Plans.Add(new Plan { MethodVersion = "test", InputsJson = "{}", OutputsJson = "{}" });
+            client.Visits.Add(visit);
+            db.Clients.Add(client);
+            await db.SaveChangesAsync();
+            return (client.Id, visit.Plans[0].Id);
+        });
+
+    public static Task<int> KitDeviceAsync(this ClinicApp app, string code, string name) =>
+        app.WithDbAsync(async db =>
+        {
+            var device = new KitDevice { Code = code, Name = name, Kind = KitDeviceKind.HandMagnifier };
+            db.KitDevices.Add(device);
+            await db.SaveChangesAsync();
+            return device.Id;
+        });
+
     /// <summary>The fields of a complete visit form: a client reading 4M at 40 cm who wants newspaper print.</summary>
     public static Dictionary<string, string> VisitForm(string date = "2026-11-20") => new()
     {
@@ -21,7 +43,7 @@ public static class Records
         ["Input.Practitioner"] = "Test practitioner",
         ["Input.DistanceRight"] = "6/60",
         ["Input.DistanceLeft"] = "20/400",
-        ["Input.DistanceBoth"] = "0.1",
+        ["Input.DistanceBoth"] = "0.1 decimal",
         ["Input.NearThreshold"] = "4M",
         ["Input.NearTestDistance"] = "40 cm",
         ["Input.AddWorn"] = "+2.50",

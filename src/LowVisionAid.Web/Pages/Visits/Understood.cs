@@ -1,5 +1,6 @@
 using System.Globalization;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Web.Infrastructure;
 
@@ -21,10 +22,11 @@ internal static class Understood
         Add(rows, "Distance acuity, both eyes", input.DistanceBoth, t => Acuity(Readings.Acuity(t), snellen));
         Add(rows, "Near: smallest print read", input.NearThreshold, t => Print(Readings.PrintSize(t)));
         Add(rows, "Near: test distance", input.NearTestDistance, t => Length(Readings.Distance(t)));
-        if (Readings.PrintSize(input.NearThreshold ?? "") is { Success: true } near && Readings.Distance(input.NearTestDistance ?? "") is { Success: true } at)
+        if (!string.IsNullOrWhiteSpace(input.NearThreshold) && !string.IsNullOrWhiteSpace(input.NearTestDistance)
+            && Readings.NearAcuity(input.NearThreshold, input.NearTestDistance).TryGetValue(out var near))
         {
-            var acuity = Optics.Quantities.Acuity.FromNearThreshold(near.Value, at.Value);
-            rows.Add(new("Near acuity", $"{input.NearThreshold!.Trim()} at {input.NearTestDistance!.Trim()}", NearFraction(near.Value, at.Value), LogMar(acuity), null, null));
+            rows.Add(new("Near acuity", $"{input.NearThreshold.Trim()} at {input.NearTestDistance.Trim()}",
+                $"{NearAcuityNotation.Format(near, Invariant)} ({NearAcuityNotation.FormatMetresOverM(near, Invariant)})", LogMar(near.Acuity), null, null));
         }
 
         Add(rows, "Add worn", input.AddWorn, t => Dioptres(Readings.Power(t)));
@@ -56,26 +58,22 @@ internal static class Understood
             return (null, null, null, result.Error);
         }
 
-        var numerator = snellen == SnellenUnit.Feet ? 20 : 6;
-        var snellenText = $"{numerator}/{acuity.SnellenDenominator(numerator).ToString("0.#", Invariant)}";
-        return ($"{snellenText} (decimal {acuity.DecimalValue.ToString("0.00#", Invariant)})", LogMar(acuity), result.Warning, null);
+        var snellenText = DistanceAcuityNotation.Format(acuity, snellen == SnellenUnit.Feet ? AcuityNotation.SnellenFeet : AcuityNotation.SnellenMetres, Invariant);
+        return ($"{snellenText} ({DistanceAcuityNotation.Format(acuity, AcuityNotation.DecimalAcuity, Invariant)})", LogMar(acuity), result.Warning, null);
     }
 
     private static (string?, string?, string?, string?) Print(Optics.Text.ParseResult<PrintSize> result) =>
         result.TryGetValue(out var size)
-            ? ($"{size.ToString(null, Invariant)} (x-height {size.ToString("mm", Invariant)})", null, result.Warning, null)
+            ? ($"{PrintSizeNotation.Format(size, PrintSizeUnit.MUnits, Invariant)} (x-height {PrintSizeNotation.Format(size, PrintSizeUnit.XHeightMillimetres, Invariant)}, about {PrintSizeNotation.Format(size, PrintSizeUnit.NNotation, Invariant)})", null, result.Warning, null)
             : (null, null, null, result.Error);
 
     private static (string?, string?, string?, string?) Length(Optics.Text.ParseResult<Distance> result) =>
         result.TryGetValue(out var d)
-            ? ($"{d.ToString(null, Invariant)} ({d.ToString("in", Invariant)})", null, result.Warning, null)
+            ? ($"{DistanceNotation.Format(d, Invariant)} ({DistanceNotation.Format(d, Invariant, "in")})", null, result.Warning, null)
             : (null, null, null, result.Error);
 
     private static (string?, string?, string?, string?) Dioptres(Optics.Text.ParseResult<Power> result) =>
         result.TryGetValue(out var p) ? (p.ToString(null, Invariant), null, result.Warning, null) : (null, null, null, result.Error);
 
-    private static string NearFraction(PrintSize size, Distance distance) =>
-        $"{distance.Metres.ToString("0.00", Invariant)}/{size.M.ToString("0.0#", Invariant)}M";
-
-    internal static string LogMar(Acuity acuity) => acuity.LogMar.ToString("0.00", Invariant);
+    internal static string LogMar(Acuity acuity) => DistanceAcuityNotation.Format(acuity, AcuityNotation.LogMar, Invariant).Replace(" logMAR", "", StringComparison.Ordinal);
 }

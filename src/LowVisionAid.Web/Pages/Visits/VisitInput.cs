@@ -118,6 +118,16 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
         RuleFor(v => v.NearThreshold)
             .NotEmpty().When(v => !string.IsNullOrWhiteSpace(v.NearTestDistance))
             .WithMessage("Type the smallest print read at the test distance, such as 2.5M, or clear the test distance.");
+        RuleFor(v => v.NearThreshold)
+            .Custom((threshold, context) =>
+            {
+                var visit = context.InstanceToValidate;
+                if (Readings.PrintSize(threshold ?? "").Success && Readings.Distance(visit.NearTestDistance ?? "").Success
+                    && Readings.NearAcuity(threshold!, visit.NearTestDistance!) is { Success: false } near)
+                {
+                    context.AddFailure(near.Error);
+                }
+            });
         RuleFor(v => v.ContrastSensitivity).Reads(Readings.LogContrastSensitivity);
         RuleFor(v => v.RefractionWorn).MaximumLength(FieldLimits.Name).WithMessage($"Keep the refraction to {FieldLimits.Name} characters or fewer.");
         RuleFor(v => v.AddWorn).Reads(Readings.Power);

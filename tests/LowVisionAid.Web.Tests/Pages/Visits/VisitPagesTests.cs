@@ -1,4 +1,6 @@
 using System.Net;
+using System.Text.Encodings.Web;
+using LowVisionAid.Optics.Notation;
 using LowVisionAid.Web.Pages.Visits;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
@@ -80,6 +82,41 @@ public class VisitPagesTests
         Assert.Contains("value=\"6//60\"", html, StringComparison.Ordinal);
         Assert.Contains("<a href=\"#Input_Goals_1__TargetPrint\">", html, StringComparison.Ordinal);
         Assert.Equal(0, await app.WithDbAsync(db => db.Visits.CountAsync()));
+    }
+
+    [Fact]
+    public async Task A_bare_number_is_not_guessed_and_the_core_message_says_how_to_write_it()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-6");
+        using var browser = app.Browser();
+        var form = Records.VisitForm();
+        form["Input.DistanceBoth"] = "0.3";
+
+        var response = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", form);
+
+        var html = await response.Content.ReadAsStringAsync();
+        var expected = DistanceAcuityNotation.Parse("0.3", CultureInfo.InvariantCulture).Error!;
+        Assert.Contains(HtmlEncoder.Default.Encode(expected), html, StringComparison.Ordinal);
+        Assert.Contains("id=\"Input_DistanceBoth-error\"", html, StringComparison.Ordinal);
+        Assert.Equal(0, await app.WithDbAsync(db => db.Visits.CountAsync()));
+    }
+
+    [Fact]
+    public async Task An_approximate_notation_is_read_back_with_its_caution()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-7");
+        using var browser = app.Browser();
+        var form = Records.VisitForm();
+        form["Input.Goals[0].TargetPrint"] = "J5";
+
+        var response = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", form, $"/Visits/New?clientId={clientId}&handler=Check");
+
+        var html = await response.Content.ReadAsStringAsync();
+        var warning = PrintSizeNotation.Parse("J5", CultureInfo.InvariantCulture).Warning;
+        Assert.NotNull(warning);
+        Assert.Contains("<strong>Caution:</strong> " + HtmlEncoder.Default.Encode(warning), html, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -1,0 +1,48 @@
+using LowVisionAid.Data;
+using Microsoft.EntityFrameworkCore;
+
+namespace LowVisionAid.Web.Pages.FollowUps;
+
+public sealed record FollowUpRow(int TrialId, Guid Version, int ClientId, string ClientCode, int PlanId, string Device, DateOnly Due, string Status);
+
+/// <summary>Follow-ups booked and not yet done, earliest first, each marked overdue, due today or upcoming.</summary>
+public sealed class FollowUpListHandler(ClinicDbContext db, TimeProvider clock)
+{
+    public async Task<IReadOnlyList<FollowUpRow>> HandleAsync(CancellationToken ct)
+    {
+        var today = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        var rows = await db.Trials.AsNoTracking()
+            .Where(t => t.FollowUpDue != null && t.FollowUpDone == null)
+            .OrderBy(t => t.FollowUpDue).ThenBy(t => t.Id)
+            .Select(t => new { t.Id, t.Version, t.Plan!.Visit!.ClientId, t.Plan.Visit.Client!.Code, t.PlanId, t.DeviceDescription, Due = t.FollowUpDue!.Value })
+            .ToListAsync(ct).ConfigureAwait(false);
+        return [.. rows.Select(r => new FollowUpRow(r.Id, r.Version, r.ClientId, r.Code, r.PlanId, r.DeviceDescription, r.Due, Status(r.Due, today)))];
+    }
+
+    internal static string Status(DateOnly due, DateOnly today) =>
+        due < today ? "Overdue" : due == today ? "Due today" : "Upcoming";
+}
+
+public sealed class FollowUpDoneHandler(ClinicDbContext db, TimeProvider clock)
+{
+    /// <summary>Marks the follow-up done; false when the trial is gone or someone changed it meanwhile.</summary>
+    public async Task<bool> HandleAsync(int trialId, Guid version, CancellationToken ct)
+    {
+        var trial = await db.Trials.FirstOrDefaultAsync(t => t.Id == trialId, ct).ConfigureAwait(false);
+        if (trial is null || trial.Version != version)
+        {
+            return false;
+        }
+
+        trial.FollowUpDone = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        try
+        {
+            await db.SaveChangesAsync(ct).ConfigureAwait(false);
+            return true;
+        }
+        catch (DbUpdateConcurrencyException)
+        {
+            return false;
+        }
+    }
+}

@@ -1,0 +1,73 @@
+using System.Globalization;
+using FluentValidation;
+using LowVisionAid.Data.Entities;
+using LowVisionAid.Web.Infrastructure;
+using Microsoft.AspNetCore.Mvc;
+using Microsoft.AspNetCore.Mvc.RazorPages;
+using Microsoft.AspNetCore.Mvc.Rendering;
+
+namespace LowVisionAid.Web.Pages.Trials;
+
+public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler handler, TimeProvider clock) : PageModel
+{
+    [BindProperty(SupportsGet = true)]
+    public int PlanId { get; set; }
+
+    [BindProperty]
+    public TrialInput Input { get; set; } = new();
+
+    public TrialContext Context { get; private set; } = null!;
+
+    public static IReadOnlyList<SelectListItem> TaskChoices { get; } =
+        [new SelectListItem("Not for one task", ""), .. Labels.Choices<GoalTask>(Labels.Task)];
+
+    public static IReadOnlyList<SelectListItem> OutcomeChoices { get; } =
+        [new SelectListItem("Choose what was decided", ""), .. Labels.Choices<TrialOutcome>(Labels.Outcome)];
+
+    public async Task<IActionResult> OnGetAsync(CancellationToken ct)
+    {
+        if (!await LoadAsync(ct).ConfigureAwait(false))
+        {
+            return NotFound();
+        }
+
+        Input.TrialDate = DateOnly.FromDateTime(clock.GetLocalNow().DateTime).ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+        return Page();
+    }
+
+    public async Task<IActionResult> OnPostAsync(CancellationToken ct)
+    {
+        if (!await LoadAsync(ct).ConfigureAwait(false))
+        {
+            return NotFound();
+        }
+
+        var check = await validator.ValidateAsync(Input, ct).ConfigureAwait(false);
+        if (!check.IsValid)
+        {
+            ModelState.AddErrors(check, nameof(Input));
+            return Page();
+        }
+
+        var (id, kitError) = await handler.HandleAsync(PlanId, Input, ct).ConfigureAwait(false);
+        if (kitError is not null)
+        {
+            ModelState.AddModelError($"{nameof(Input)}.{nameof(TrialInput.KitDeviceId)}", kitError);
+            return Page();
+        }
+
+        return Redirect($"/Plans/{PlanId}#trial-{id}");
+    }
+
+    private async Task<bool> LoadAsync(CancellationToken ct)
+    {
+        var context = await handler.ContextAsync(PlanId, ct).ConfigureAwait(false);
+        if (context is null)
+        {
+            return false;
+        }
+
+        Context = context;
+        return true;
+    }
+}
