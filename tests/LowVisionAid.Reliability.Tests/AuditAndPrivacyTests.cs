@@ -101,7 +101,7 @@ public sealed class AuditAndPrivacyTests
         Assert.Contains(lines, l => l is { Action: AuditAction.Exported, RecordType: "Client", Detail: "CSV" } && l.RecordId == clientId);
         var erased = Assert.Single(lines, l => l is { Action: AuditAction.Erased, RecordType: "Client" } && l.RecordId == clientId);
         Assert.Contains("Visits 1", erased.Detail, StringComparison.Ordinal);
-        Assert.All(lines.Where(l => l.RecordType is "Client" or "Visit"), l => Assert.Equal(Accounts.AdminName, l.Actor));
+        Assert.All(lines.Where(l => (l.RecordType == "Client" && l.RecordId == clientId) || (l.RecordType == "Visit" && l.RecordId == visitId)), l => Assert.Equal(Accounts.AdminName, l.Actor));
         Assert.All(lines, l => Assert.InRange(l.AtUtc, started, DateTime.UtcNow.AddSeconds(1)));
         Assert.Contains("Erased", page, StringComparison.Ordinal);
         Assert.Contains("Exported", page, StringComparison.Ordinal);
