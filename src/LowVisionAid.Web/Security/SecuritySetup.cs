@@ -21,6 +21,11 @@ internal static class SecuritySetup
     /// <summary>Configuration key for the backup folder; default <c>&lt;data folder&gt;/backups</c>.</summary>
     public const string BackupFolderKey = "BackupFolder";
 
+    /// <summary>The answer to a form that could not be accepted at all (400).</summary>
+    public const string BadRequestMessage =
+        "This form could not be accepted: it arrived without its security token (the page may have been open a long time, or the app restarted) " +
+        "or with characters that cannot be stored. Nothing was saved. Go back, reload the page and type the entry again.";
+
     public static WebApplicationBuilder AddClinicSecurity(this WebApplicationBuilder builder)
     {
         var settings = AccessSettings.From(builder.Configuration);
@@ -117,6 +122,13 @@ internal static class SecuritySetup
             }
 
             await next(context).ConfigureAwait(false);
+
+            // A refused form (no antiforgery token, or characters the form reader cannot accept) otherwise comes back empty.
+            if (context.Response is { StatusCode: StatusCodes.Status400BadRequest, HasStarted: false, ContentLength: null or 0 })
+            {
+                context.Response.ContentType = "text/plain; charset=utf-8";
+                await context.Response.WriteAsync(BadRequestMessage, context.RequestAborted).ConfigureAwait(false);
+            }
         });
         app.UseSecurityHeaders();
         return app;
