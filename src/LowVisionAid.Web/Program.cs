@@ -9,11 +9,14 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
     builder.WebHost.UseUrls("http://127.0.0.1:5080");
 }
 
-builder.AddClinicData();     // SQLite file in the data folder, migrations from LowVisionAid.Migrations
-builder.AddClinicPages();    // Razor Pages, validators and the clinic-flow handlers
-builder.AddClinicSecurity(); // loopback unless Access:AllowLan, sign-in and roles, audit trail, backups
+builder.AddClinicData();                    // SQLite file in the data folder, migrations from LowVisionAid.Migrations
+builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
+builder.Services.AddRazorPages();
+builder.AddClinicSecurity();                // loopback unless Access:AllowLan, sign-in and roles, audit trail, backups
 
 var app = builder.Build();
+await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
+await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 
 if (!app.Environment.IsDevelopment())
 {
@@ -26,6 +29,4 @@ app.UseRouting();
 app.UseClinicSignIn();             // authentication and authorization
 app.MapRazorPages();
 
-await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);  // backup before any migration, then users and audit schema
-await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 await app.RunAsync().ConfigureAwait(false);
