@@ -1,4 +1,5 @@
 using LowVisionAid.Web.Infrastructure;
+using LowVisionAid.Web.Security;
 
 var builder = WebApplication.CreateBuilder(args);
 
@@ -11,11 +12,13 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
 builder.AddClinicData();                    // SQLite file in the data folder, migrations from LowVisionAid.Migrations
 builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
 builder.Services.AddRazorPages();
+builder.AddClinicSecurity();                // loopback unless Access:AllowLan, sign-in and roles, audit trail, backups
 
 builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
 builder.Services.AddCalculationApi();       // JSON API for plans and conversions, OpenAPI at /openapi/v1.json
 
 var app = builder.Build();
+await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
 await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
 
 if (!app.Environment.IsDevelopment())
@@ -23,9 +26,11 @@ if (!app.Environment.IsDevelopment())
     app.UseExceptionHandler("/Error");
 }
 
+app.UseClinicSecurityHeaders();   // other computers refused unless allowed; CSP and the other headers
 app.UseFriendlyErrors();                    // not-found page for people, ProblemDetails under /api
 app.UseStaticFiles();
 app.UseRouting();
+app.UseClinicSignIn();             // authentication and authorization
 app.MapRazorPages();
 app.MapCalculationApi();
 

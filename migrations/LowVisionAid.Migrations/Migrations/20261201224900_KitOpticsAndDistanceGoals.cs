@@ -10,6 +10,11 @@ namespace LowVisionAid.Migrations.Migrations
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
+            // Keep what was typed in the dropped column: move it into the device's notes first.
+            migrationBuilder.Sql(
+                "UPDATE \"KitDevices\" SET \"Notes\" = COALESCE(\"Notes\" || char(10), '') || 'Magnification range: ' || \"MagnificationRange\" " +
+                "WHERE \"MagnificationRange\" IS NOT NULL AND \"MagnificationRange\" <> ''");
+
             migrationBuilder.DropColumn(
                 name: "MagnificationRange",
                 table: "KitDevices");

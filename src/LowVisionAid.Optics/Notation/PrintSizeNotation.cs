@@ -137,8 +137,9 @@ public static partial class PrintSizeNotation
         return ParseResult.Ok(size, ParseMessages.JaegerApproximate(label, Format(size, PrintSizeUnit.MUnits, provider), snellen, assumedDistance));
     }
 
+    // A point size so small that its x-height underflows to 0 mm is refused as out of range, not thrown.
     private static double FromPoints(double points, XHeightRatio ratio) =>
-        points > 0 ? PrintSize.FromPoints(points, ratio).M : double.NaN;
+        points > 0 && points * UnitFactors.MillimetresPerPoint * ratio.Value > 0 ? PrintSize.FromPoints(points, ratio).M : double.NaN;
 
     [GeneratedRegex(@"^j\s*(?<j>[0-9]{1,3}\+?)$", RegexOptions.CultureInvariant)]
     internal static partial Regex JaegerPattern();

@@ -52,7 +52,16 @@ public sealed class NewClientHandler(ClinicDbContext db)
             Notes = Blank(input.Notes),
         };
         db.Clients.Add(client);
-        await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        try
+        {
+            await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        }
+        catch (DbUpdateException e) when (e.InnerException is Microsoft.Data.Sqlite.SqliteException { SqliteExtendedErrorCode: 2067 })
+        {
+            // Two people saved the same new code at the same moment: the unique index let only one in (SQLITE_CONSTRAINT_UNIQUE).
+            return new(null, CodeTaken);
+        }
+
         return new(client.Id, null);
     }
 

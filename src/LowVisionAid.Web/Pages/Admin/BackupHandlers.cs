@@ -1,0 +1,43 @@
+using LowVisionAid.Data;
+using LowVisionAid.Data.Access;
+using LowVisionAid.Data.Audit;
+using LowVisionAid.Data.Backup;
+using LowVisionAid.Web.Security;
+using Microsoft.AspNetCore.Identity;
+using Microsoft.EntityFrameworkCore;
+
+namespace LowVisionAid.Web.Pages.Admin;
+
+/// <summary>Takes a backup now and records it in the audit trail.</summary>
+public sealed class TakeBackupHandler(DatabaseBackups backups, AuditTrail audit)
+{
+    public async Task<BackupFile> HandleAsync(CancellationToken ct)
+    {
+        var file = backups.Create("manual");
+        await audit.RecordAsync(AuditAction.BackedUp, "Database", null, file.Name, ct).ConfigureAwait(false);
+        return file;
+    }
+}
+
+/// <summary>
+/// Restores a checked backup over the live database (after a "before-restore" backup of it), upgrades its schema if
+/// it is older, and records the restore in the restored audit trail.
+/// </summary>
+public sealed class RestoreBackupHandler(
+    DatabaseBackups backups, ClinicDbContext clinic, AccessDbContext access, RoleManager<IdentityRole> roles, AuditTrail audit)
+{
+    public async Task<RestoreCheck> HandleAsync(string candidatePath, string shownName, CancellationToken ct)
+    {
+        var check = backups.Restore(candidatePath, SecuritySetup.KnownMigrations(clinic, access));
+        if (!check.CanRestore)
+        {
+            return check;
+        }
+
+        await access.Database.MigrateAsync(ct).ConfigureAwait(false);
+        await clinic.Database.MigrateAsync(ct).ConfigureAwait(false);
+        await SecuritySetup.EnsureRolesAsync(roles).ConfigureAwait(false);
+        await audit.RecordAsync(AuditAction.Restored, "Database", null, shownName, ct).ConfigureAwait(false);
+        return check;
+    }
+}

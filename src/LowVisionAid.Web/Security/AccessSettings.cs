@@ -1,0 +1,30 @@
+namespace LowVisionAid.Web.Security;
+
+/// <summary>
+/// Who may reach the app, from configuration section <c>Access</c>. By default the app listens on 127.0.0.1 only
+/// and needs no sign-in (one PC, one person at a time). <see cref="AllowLan"/> is the explicit setting that lets it
+/// listen on a network address, and then sign-in is always required.
+/// </summary>
+public sealed class AccessSettings
+{
+    public const string Section = "Access";
+
+    /// <summary>Allow listening on a non-loopback address (set <c>Access:AllowLan=true</c> and <c>--urls</c>).</summary>
+    public bool AllowLan { get; init; }
+
+    /// <summary>Require sign-in even on loopback (<c>Access:RequireSignIn=true</c>). Always on when <see cref="AllowLan"/> is.</summary>
+    public bool RequireSignIn { get; init; }
+
+    /// <summary>True when every page except sign-in and static files needs a signed-in user.</summary>
+    public bool SignInRequired => RequireSignIn || AllowLan;
+
+    public static AccessSettings From(IConfiguration configuration)
+    {
+        ArgumentNullException.ThrowIfNull(configuration);
+        return new AccessSettings
+        {
+            AllowLan = configuration.GetValue($"{Section}:{nameof(AllowLan)}", defaultValue: false),
+            RequireSignIn = configuration.GetValue($"{Section}:{nameof(RequireSignIn)}", defaultValue: false),
+        };
+    }
+}

@@ -1,0 +1,141 @@
+using System.Diagnostics;
+using System.Net;
+using System.Net.Sockets;
+
+namespace LowVisionAid.Reliability.Tests.Support;
+
+/// <summary>
+/// The built app started as a real process on 127.0.0.1 (a free port) over its own data folder, reached over loopback.
+/// Only ever loopback: the app refuses anything else without Access:AllowLan.
+/// </summary>
+public sealed class AppProcess : IDisposable
+{
+    private readonly Process _process;
+    private bool _disposed;
+
+    private AppProcess(Process process, Uri address)
+    {
+        _process = process;
+        Address = address;
+    }
+
+    public Uri Address { get; }
+
+    public bool HasExited => _process.HasExited;
+
+    public static string WebAssemblyPath()
+    {
+        var testFolder = AppContext.BaseDirectory;                         // …/tests/X/bin/<Configuration>/net10.0/
+        var configuration = new DirectoryInfo(testFolder).Parent!.Name;    // Debug or Release
+        var root = new DirectoryInfo(testFolder);
+        while (root is not null && !File.Exists(Path.Combine(root.FullName, "LowVisionAid.sln")))
+        {
+            root = root.Parent;
+        }
+
+        var dll = Path.Combine(root!.FullName, "src", "LowVisionAid.Web", "bin", configuration, "net10.0", "LowVisionAid.Web.dll");
+        return File.Exists(dll) ? dll : throw new FileNotFoundException("Build the web app first (dotnet build).", dll);
+    }
+
+    public static int FreeLoopbackPort()
+    {
+        using var listener = new TcpListener(IPAddress.Loopback, 0);
+        listener.Start();
+        return ((IPEndPoint)listener.LocalEndpoint).Port;
+    }
+
+    /// <summary>Starts the app; <paramref name="waitUntilReady"/> polls GET / until it answers (at most <paramref name="timeout"/>).</summary>
+    public static async Task<AppProcess> StartAsync(string dataFolder, bool loadDemo, TimeSpan timeout, bool waitUntilReady = true)
+    {
+        var dll = WebAssemblyPath();
+        var port = FreeLoopbackPort();
+        var address = new Uri($"http://127.0.0.1:{port}");
+        var start = new ProcessStartInfo("dotnet")
+        {
+            WorkingDirectory = Path.GetDirectoryName(Path.GetDirectoryName(Path.GetDirectoryName(Path.GetDirectoryName(dll))))!,
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            UseShellExecute = false,
+        };
+        foreach (var arg in new[] { dll, "--urls", address.ToString().TrimEnd('/'), "--DataFolder", dataFolder, "--LoadDemoClinic", loadDemo ? "true" : "false", "--Logging:LogLevel:Default", "Warning" })
+        {
+            start.ArgumentList.Add(arg);
+        }
+
+        start.Environment["ASPNETCORE_ENVIRONMENT"] = "Production";
+        start.Environment["DOTNET_gcServer"] = "0";
+        var process = Process.Start(start)!;
+        process.OutputDataReceived += (_, _) => { };
+        process.ErrorDataReceived += (_, _) => { };
+        process.BeginOutputReadLine();
+        process.BeginErrorReadLine();
+        var app = new AppProcess(process, address);
+        if (waitUntilReady)
+        {
+            await app.WaitUntilReadyAsync(timeout);
+        }
+
+        return app;
+    }
+
+    public async Task WaitUntilReadyAsync(TimeSpan timeout)
+    {
+        using var http = new HttpClient { BaseAddress = Address, Timeout = TimeSpan.FromSeconds(5) };
+        var deadline = DateTime.UtcNow + timeout;
+        while (DateTime.UtcNow < deadline)
+        {
+            if (_process.HasExited)
+            {
+                throw new InvalidOperationException($"The app exited with code {_process.ExitCode} while starting.");
+            }
+
+            try
+            {
+                using var response = await http.GetAsync(new Uri("/", UriKind.Relative));
+                if (response.StatusCode == HttpStatusCode.OK)
+                {
+                    return;
+                }
+            }
+            catch (HttpRequestException)
+            {
+            }
+            catch (TaskCanceledException)
+            {
+            }
+
+            await Task.Delay(100);
+        }
+
+        throw new TimeoutException($"The app did not answer on {Address} within {timeout}.");
+    }
+
+    public FormClient NewClient()
+    {
+        var handler = new HttpClientHandler { AllowAutoRedirect = false, UseCookies = true, CookieContainer = new CookieContainer() };
+        return new FormClient(new HttpClient(handler, disposeHandler: true) { BaseAddress = Address, Timeout = TimeSpan.FromSeconds(30) });
+    }
+
+    /// <summary>SIGKILL: no shutdown code runs, as when the power goes or the process is killed.</summary>
+    public void Kill()
+    {
+        if (_disposed)
+        {
+            return;
+        }
+
+        if (!_process.HasExited)
+        {
+            _process.Kill(entireProcessTree: true);
+        }
+
+        _process.WaitForExit(10_000);
+    }
+
+    public void Dispose()
+    {
+        Kill();
+        _disposed = true;
+        _process.Dispose();
+    }
+}
