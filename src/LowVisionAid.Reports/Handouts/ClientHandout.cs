@@ -1,0 +1,71 @@
+using LowVisionAid.Optics.Quantities;
+
+namespace LowVisionAid.Reports.Handouts;
+
+/// <summary>
+/// Everything the large-print client handout prints, as plain values already worked out by the plan.
+/// Lists hold short sentences in plain language, one instruction each.
+/// </summary>
+/// <param name="Clinic">The clinic's name and contact, printed at the top and the end.</param>
+/// <param name="ClientCode">The client's code (always printed).</param>
+/// <param name="ClientName">The client's name, or null to print the code only.</param>
+/// <param name="IssuedOn">The day the handout is given.</param>
+/// <param name="FollowUpOn">The follow-up date, or null when none is booked yet.</param>
+/// <param name="Devices">The chosen device or devices; at least one.</param>
+/// <param name="Light">Advice on lighting.</param>
+/// <param name="Practice">A short practice routine.</param>
+/// <param name="Care">How to look after the device.</param>
+/// <param name="IfItStopsHelping">What to do if it stops helping.</param>
+/// <param name="TargetPrint">The print size the client wants to read; one line is printed at this size.</param>
+/// <param name="BodyPoints">Body text size in points: 18 by default, 24 or more on request.</param>
+/// <param name="Paper">A4 or Letter.</param>
+public sealed record ClientHandout(
+    ClinicContact Clinic,
+    string ClientCode,
+    string? ClientName,
+    DateOnly IssuedOn,
+    DateOnly? FollowUpOn,
+    IReadOnlyList<HandoutDevice> Devices,
+    IReadOnlyList<string> Light,
+    IReadOnlyList<string> Practice,
+    IReadOnlyList<string> Care,
+    IReadOnlyList<string> IfItStopsHelping,
+    PrintSize TargetPrint,
+    double BodyPoints = ClientHandout.DefaultBodyPoints,
+    PaperSize Paper = PaperSize.A4)
+{
+    /// <summary>The default body size, 18 pt (large print).</summary>
+    public const double DefaultBodyPoints = 18;
+
+    /// <summary>The larger body size offered on request, 24 pt.</summary>
+    public const double LargerBodyPoints = 24;
+
+    /// <summary>The largest body size accepted, 48 pt.</summary>
+    public const double MaximumBodyPoints = 48;
+
+    /// <summary>Smallest target print accepted for the check line, in M units.</summary>
+    public const double MinimumTargetM = 0.4;
+
+    /// <summary>Largest target print accepted for the check line, in M units.</summary>
+    public const double MaximumTargetM = 10;
+}
+
+/// <summary>One chosen device, described for the client.</summary>
+/// <param name="Name">What to call it, e.g. "Hand magnifier with a light".</param>
+/// <param name="WhatItIs">One or two plain sentences on what it is.</param>
+/// <param name="Task">The task it is for, e.g. "Reading letters and bills".</param>
+/// <param name="HowToUse">Steps for holding or setting it.</param>
+/// <param name="Distances">The distances to keep, each printed in centimetres and inches.</param>
+/// <param name="HasLightOrBattery">True for illuminated or electronic devices (adds the charging caution).</param>
+public sealed record HandoutDevice(
+    string Name,
+    string WhatItIs,
+    string Task,
+    IReadOnlyList<string> HowToUse,
+    IReadOnlyList<HandoutDistance> Distances,
+    bool HasLightOrBattery = false);
+
+/// <summary>A distance the client keeps, e.g. "Lens to page" and 8 cm.</summary>
+/// <param name="What">What the distance is between, in plain words.</param>
+/// <param name="Distance">The distance (a positive magnitude).</param>
+public sealed record HandoutDistance(string What, Distance Distance);

@@ -1,0 +1,30 @@
+namespace LowVisionAid.Reports;
+
+/// <summary>The messages a failed <see cref="ReportResult"/> carries, written to be shown on screen as they are.</summary>
+public static class ReportMessages
+{
+    /// <summary>The plan has no chosen device option.</summary>
+    public const string NoChosenOption =
+        "This plan has no chosen option yet, so there is nothing to print. Choose at least one device option on the plan page, then print again.";
+
+    /// <summary>The client code is missing.</summary>
+    public const string NoClientCode = "The client code is missing. Every report needs the client's code; save the client's record first.";
+
+    /// <summary>The clinic's name or telephone number is missing.</summary>
+    public const string NoClinicContact =
+        "The clinic's name and telephone number are missing. Enter them in the clinic settings so the client knows whom to call.";
+
+    /// <summary>A device has no name.</summary>
+    public const string UnnamedDevice = "A chosen option has no name. Give every chosen option a name on the plan page.";
+
+    /// <summary>The body size is outside what the handout accepts.</summary>
+    public const string BodySizeOutOfRange =
+        "The handout text size must be between 18 pt and 48 pt. Choose 18 pt (large print) or 24 pt (larger print).";
+
+    /// <summary>The target print size is outside what the check line can show.</summary>
+    public const string TargetOutOfRange =
+        "The target print size must be between 0.4M and 10M to print the check line. Enter the target print size on the plan page.";
+
+    /// <summary>The method version is missing from a clinician summary.</summary>
+    public const string NoMethodVersion = "The method version is missing. The clinical record must say which version of the methods was used.";
+}

@@ -1,0 +1,78 @@
+using LowVisionAid.Optics.Quantities;
+
+namespace LowVisionAid.Reports.Summaries;
+
+/// <summary>
+/// Everything the clinician summary prints for the clinical record, as values already worked out by the plan.
+/// </summary>
+/// <param name="Clinic">The clinic's name and contact.</param>
+/// <param name="ClientCode">The client's code.</param>
+/// <param name="ClientName">The client's name, or null.</param>
+/// <param name="AssessedOn">The date of the assessment.</param>
+/// <param name="Clinician">Who assessed, or null.</param>
+/// <param name="Inputs">The measurements and choices the plan started from, already formatted.</param>
+/// <param name="Estimates">Each method's estimate of the equivalent power needed.</param>
+/// <param name="ChosenOptions">The chosen device options; at least one.</param>
+/// <param name="Trials">Trials and their outcomes, oldest first.</param>
+/// <param name="MethodVersion">The version of the methods that produced the figures, e.g. "methods 2027.1".</param>
+/// <param name="Paper">A4 or Letter.</param>
+/// <param name="FigureTables">The trade-off figures' data tables to print with the record (from <see cref="Figures.TradeOffFigures"/>), or null.</param>
+public sealed record ClinicianSummary(
+    ClinicContact Clinic,
+    string ClientCode,
+    string? ClientName,
+    DateOnly AssessedOn,
+    string? Clinician,
+    IReadOnlyList<SummaryInput> Inputs,
+    IReadOnlyList<MethodEstimate> Estimates,
+    IReadOnlyList<ChosenOption> ChosenOptions,
+    IReadOnlyList<TrialRecord> Trials,
+    string MethodVersion,
+    PaperSize Paper = PaperSize.A4,
+    IReadOnlyList<Figures.FigureTable>? FigureTables = null);
+
+/// <summary>One input as the record shows it, e.g. "Distance acuity" and "6/60 (logMAR 1.00)".</summary>
+/// <param name="Label">What was measured or chosen.</param>
+/// <param name="Value">The value as entered or formatted.</param>
+public sealed record SummaryInput(string Label, string Value);
+
+/// <summary>One published method's estimate of the equivalent power needed.</summary>
+/// <param name="Method">The method's name, e.g. "Kestenbaum".</param>
+/// <param name="EquivalentPower">The estimate, or null when the method could not be applied.</param>
+/// <param name="Basis">What the estimate rests on, or why it is missing.</param>
+/// <param name="DisagreesWithOthers">True when the plan flags it as more than 0.2 log units from another estimate.</param>
+public sealed record MethodEstimate(string Method, Power? EquivalentPower, string Basis, bool DisagreesWithOthers = false);
+
+/// <summary>A chosen device option with every figure the plan worked out for it and the reasons for it.</summary>
+/// <param name="Name">The option's name.</param>
+/// <param name="Kind">The kind of device, e.g. "Hand magnifier".</param>
+/// <param name="EquivalentPower">Its equivalent power.</param>
+/// <param name="WorkingDistance">Lens-to-page (or eye-to-page) working distance.</param>
+/// <param name="Field">Linear field on the page, or null when not applicable.</param>
+/// <param name="LettersInView">Letters of the target print in the field, or null.</param>
+/// <param name="OtherFigures">Every other figure, already formatted.</param>
+/// <param name="Reasons">Why it was chosen.</param>
+/// <param name="Cautions">Cautions that apply to it.</param>
+public sealed record ChosenOption(
+    string Name,
+    string Kind,
+    Power EquivalentPower,
+    Distance WorkingDistance,
+    Distance? Field,
+    int? LettersInView,
+    IReadOnlyList<OptionFigure> OtherFigures,
+    IReadOnlyList<string> Reasons,
+    IReadOnlyList<string> Cautions);
+
+/// <summary>A figure of an option, already formatted, e.g. "Depth of field" and "5.6 mm".</summary>
+/// <param name="Label">What the figure is.</param>
+/// <param name="Value">The figure with its unit.</param>
+public sealed record OptionFigure(string Label, string Value);
+
+/// <summary>One trial of a device.</summary>
+/// <param name="Date">When it was tried.</param>
+/// <param name="Device">What was tried.</param>
+/// <param name="Task">With what material or task.</param>
+/// <param name="Result">What the client achieved.</param>
+/// <param name="Outcome">What was decided, e.g. "Dispensed".</param>
+public sealed record TrialRecord(DateOnly Date, string Device, string Task, string Result, string Outcome);

@@ -1,0 +1,138 @@
+using LowVisionAid.Optics.Quantities;
+using LowVisionAid.Reports.Figures;
+using LowVisionAid.Reports.Summaries;
+using LowVisionAid.Reports.Tests.Support;
+
+namespace LowVisionAid.Reports.Tests;
+
+public class ClinicianSummaryRendererTests
+{
+    private static readonly ClinicianSummaryRenderer Renderer = new(CultureInfo.InvariantCulture);
+
+    private static PdfText Read(ClinicianSummary model)
+    {
+        var result = Renderer.Render(model);
+        Assert.True(result.Success, result.Error);
+        return PdfText.Read(result.Content);
+    }
+
+    [Fact]
+    public void Prints_every_input_and_each_method_estimate_with_its_equivalent_viewing_distance()
+    {
+        var model = SampleModels.Summary();
+
+        var text = Read(model);
+
+        foreach (var input in model.Inputs)
+        {
+            Assert.True(text.Contains(input.Label), input.Label);
+            Assert.True(text.Contains(input.Value), input.Value);
+        }
+
+        // EVD = 1/Feq (Bailey 2004 notes; methods.md §2): +10 D → 10.0 cm, +20 D → 5.0 cm (CV-06, CV-08).
+        Assert.True(text.Contains("Kestenbaum +10.00 D 10.0 cm"), text.Words);
+        Assert.True(text.Contains("+20.00 D 5.0 cm"), text.Words);
+        Assert.True(text.ContainsInCell("Differs from another estimate by more than 0.2 log units."), text.Words);
+        Assert.True(text.Contains("not available"), text.Words);
+        Assert.True(text.Contains("No reading-speed curve was measured"), text.Words);
+    }
+
+    [Fact]
+    public void Prints_every_figure_and_reason_of_each_chosen_option()
+    {
+        var model = SampleModels.Summary();
+
+        var text = Read(model);
+
+        var option = model.ChosenOptions[0];
+        Assert.True(text.Contains("Equivalent power +12.00 D"), text.Words);
+        // 8.3 cm = 3.27 in (1 in = 2.54 cm exactly), printed to 0.1 in.
+        Assert.True(text.Contains("Working distance 8.3 cm (3.3 in)"), text.Words);
+        Assert.True(text.Contains("Field on the page 55 mm"), text.Words);
+        Assert.True(text.Contains("Letters of target print in view 34"), text.Words);
+        foreach (var figure in option.OtherFigures)
+            Assert.True(text.Contains(figure.Label + " " + figure.Value), figure.Label);
+        foreach (var line in option.Reasons.Concat(option.Cautions))
+            Assert.True(text.Contains(line), line);
+    }
+
+    [Fact]
+    public void Prints_trials_outcomes_the_method_version_clinic_and_the_starting_point_note()
+    {
+        var model = SampleModels.Summary();
+
+        var text = Read(model);
+
+        Assert.True(text.Contains("2027-03-09"), text.Words);
+        foreach (var trial in model.Trials)
+        {
+            Assert.True(text.ContainsInCell(trial.Device), trial.Device);
+            Assert.True(text.ContainsInCell(trial.Result), trial.Result);
+            Assert.True(text.Contains(trial.Outcome), trial.Outcome);
+        }
+
+        Assert.True(text.Contains("Method version methods 2027.1"), text.Words);
+        Assert.True(text.Contains("01632 960 418"), text.Words);
+        Assert.True(text.Contains("Morwenna Tredinnick (HX-0042)"), text.Words);
+        Assert.True(text.Contains(ClinicianSummaryRenderer.StartingPointNote), text.Words);
+    }
+
+    [Fact]
+    public void Prints_the_trade_off_tables_it_is_given()
+    {
+        var figures = new TradeOffFigures(CultureInfo.InvariantCulture);
+        var ladder = figures.PrintSizeLadder(new PrintLadderData(PrintSize.FromM(4), PrintSize.FromM(1), AcuityReserve.Fluent, Distance.FromCentimetres(40)));
+
+        var text = Read(SampleModels.Summary() with { FigureTables = [ladder.Table] });
+
+        Assert.True(text.Contains(ladder.Table.Caption), text.Words);
+        foreach (var cell in ladder.Table.Rows.SelectMany(r => r).Where(c => c.Length > 0))
+            Assert.True(text.ContainsInCell(cell), cell);
+    }
+
+    [Fact]
+    public void Is_set_in_normal_print_in_the_embedded_hyperlegible_face()
+    {
+        var text = Read(SampleModels.Summary());
+
+        Assert.All(text.Letters, l => Assert.Matches(@"^[A-Z]{6}\+Atkinson Hyperlegible( Regular|,Bold)$", l.FontName));
+        var bodyLetters = text.Letters.Count(l => Math.Abs(l.PointSize - ClinicianSummaryRenderer.BodyPoints) < 0.01);
+        Assert.True(bodyLetters > text.Letters.Count / 2, $"{bodyLetters} of {text.Letters.Count} letters at {ClinicianSummaryRenderer.BodyPoints} pt");
+        Assert.All(text.Letters, l => Assert.InRange(l.PointSize, 10, 18));
+    }
+
+    [Fact]
+    public void Page_count_stays_within_bounds_even_with_many_options()
+    {
+        var model = SampleModels.Summary();
+        var many = Enumerable.Range(1, 6).Select(i => model.ChosenOptions[0] with { Name = "Option " + i.ToString(CultureInfo.InvariantCulture) }).ToList();
+
+        var one = Renderer.Render(model);
+        var six = Renderer.Render(model with { ChosenOptions = many });
+
+        Assert.InRange(one.PageCount, 1, 3);
+        Assert.InRange(six.PageCount, 2, 8);
+        Assert.Equal(six.PageCount, PdfText.Read(six.Content).PageCount);
+        Assert.True(PdfText.Read(six.Content).Contains("Option 6"));
+    }
+
+    [Fact]
+    public void Regenerating_the_same_record_gives_identical_text()
+    {
+        var model = SampleModels.Summary();
+
+        Assert.Equal(Read(model).Words, Read(model with { Trials = [.. model.Trials] }).Words);
+    }
+
+    [Fact]
+    public void No_chosen_option_or_no_method_version_gives_a_message_and_no_document()
+    {
+        var none = Renderer.Render(SampleModels.Summary(chosen: []));
+        var noVersion = Renderer.Render(SampleModels.Summary() with { MethodVersion = "" });
+
+        Assert.Equal(ReportMessages.NoChosenOption, none.Error);
+        Assert.True(none.Content.IsEmpty);
+        Assert.Equal(ReportMessages.NoMethodVersion, noVersion.Error);
+        Assert.True(noVersion.Content.IsEmpty);
+    }
+}
