@@ -10,6 +10,7 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
 
 builder.AddClinicData();     // SQLite file in the data folder, migrations from LowVisionAid.Migrations
 builder.AddClinicPages();    // Razor Pages, validators and the clinic-flow handlers
+builder.AddPlanHandouts();   // handout and summary PDFs, trade-off figures and the print view of a plan
 
 var app = builder.Build();
 
