@@ -41,19 +41,25 @@ public sealed record AccommodationProfile
     public double SustainedFraction { get; }
 
     /// <summary>The accommodation usable for sustained work: amplitude × sustained fraction.</summary>
-    public Power UsableSustained => Amplitude * SustainedFraction;
+    public Power UsableSustained =>
+        // usable = amplitude × fraction, half by default (common practice; methods §10.1).
+        Amplitude * SustainedFraction;
 
     /// <summary>The uncorrected myopia (0 D or a minus power) the reader has when reading without the distance correction.</summary>
     public Power UncorrectedMyopia { get; }
 
     /// <summary>The built-in add from uncorrected myopia: a myope of −K D acts as if wearing +K D (methods §3.2).</summary>
-    public Power BuiltInAddFromMyopia => Power.FromDioptres(0.0 - UncorrectedMyopia.Dioptres);
+    public Power BuiltInAddFromMyopia =>
+        // an uncorrected myope of −K D acts as if wearing +K D (methods §3.2; Ryan and Margrain 2006).
+        Power.FromDioptres(0.0 - UncorrectedMyopia.Dioptres);
 
     /// <summary>
     /// The near focus the eye supplies for sustained work without any device: usable accommodation plus the
     /// built-in add from myopia. Feq ≈ add + accommodation in use (methods §3.2; thin lens, vertex distance ignored).
     /// </summary>
-    public Power SustainedNearFocus => UsableSustained + BuiltInAddFromMyopia;
+    public Power SustainedNearFocus =>
+        // Feq ≈ add + accommodation in use (methods §3.2; thin lens, vertex distance ignored).
+        UsableSustained + BuiltInAddFromMyopia;
 
     /// <summary>True when the amplitude is an age estimate rather than a measurement.</summary>
     public bool IsEstimate => Source != AmplitudeSource.Measured;

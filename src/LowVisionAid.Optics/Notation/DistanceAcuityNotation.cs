@@ -51,7 +51,7 @@ public static partial class DistanceAcuityNotation
 
         if ((match = DecimalPattern().Match(normalised)).Success)
         {
-            return Read(match, provider, v => v > 0 ? -Math.Log10(v) : double.NaN, ParseMessages.DecimalOutOfRange);
+            return Read(match, provider, v => v > 0 ? Acuity.LogMarOfDecimal(v) : double.NaN, ParseMessages.DecimalOutOfRange);
         }
 
         if ((match = LogMarPattern().Match(normalised)).Success)
@@ -61,14 +61,14 @@ public static partial class DistanceAcuityNotation
 
         if ((match = VasPattern().Match(normalised)).Success)
         {
-            // VAS = 100 − 50 × logMAR (DICOM PS3.17 Annex RR.2.2), so logMAR = (100 − VAS) / 50.
-            return Read(match, provider, v => v is >= 0 and <= 125 ? (100.0 - v) / 50.0 : double.NaN, ParseMessages.VasOutOfRange);
+            // VAS 0–125 is logMAR 2.0 to −0.5 (the inverse formula lives in Acuity).
+            return Read(match, provider, v => v is >= 0 and <= 125 ? Acuity.LogMarOfVisualAcuityScore(v) : double.NaN, ParseMessages.VasOutOfRange);
         }
 
         if ((match = EtdrsPattern().Match(normalised)).Success)
         {
-            // ETDRS letters = 85 − 50 × logMAR (from memory, methods §1.1), so logMAR = (85 − letters) / 50.
-            return Read(match, provider, v => v is >= 0 and <= 110 ? (85.0 - v) / 50.0 : double.NaN, ParseMessages.EtdrsOutOfRange);
+            // ETDRS letters 0–110 is logMAR 1.7 to −0.5 (the inverse formula lives in Acuity).
+            return Read(match, provider, v => v is >= 0 and <= 110 ? Acuity.LogMarOfEtdrsLetters(v) : double.NaN, ParseMessages.EtdrsOutOfRange);
         }
 
         if ((match = LetterScorePattern().Match(normalised)).Success)
@@ -82,7 +82,7 @@ public static partial class DistanceAcuityNotation
             return FromLetterScore(top, letters, options.LettersPerLine);
         }
 
-        if ((match = BareNumberPattern().Match(normalised)).Success)
+        if ((match = NotationText.BareNumberPattern().Match(normalised)).Success)
         {
             return ReadBareNumber(match.Value, provider, options.BareNumbers);
         }
@@ -166,8 +166,8 @@ public static partial class DistanceAcuityNotation
             return ParseResult.Fail<Acuity>(ParseMessages.SnellenZero);
         }
 
-        // Decimal acuity = numerator ÷ denominator; logMAR = −log₁₀(decimal) (Bailey and Lovie 1976).
-        var logMar = -Math.Log10(numerator / denominator);
+        // Decimal acuity = numerator ÷ denominator (Snellen); logMAR through Acuity's one conversion.
+        var logMar = Acuity.LogMarOfDecimal(numerator / denominator);
         return InRange(logMar) ? ParseResult.Ok(Acuity.FromLogMar(logMar)) : ParseResult.Fail<Acuity>(outOfRange);
     }
 
@@ -197,7 +197,7 @@ public static partial class DistanceAcuityNotation
         }
 
         var asLogMar = InRange(value) ? Acuity.FromLogMar(value) : (Acuity?)null;
-        var asDecimal = value > 0 && InRange(-Math.Log10(value)) ? Acuity.FromDecimal(value) : (Acuity?)null;
+        var asDecimal = value > 0 && InRange(Acuity.LogMarOfDecimal(value)) ? Acuity.FromDecimal(value) : (Acuity?)null;
         if (asLogMar is null && asDecimal is null)
         {
             return ParseResult.Fail<Acuity>(ParseMessages.BareNumberNotAnAcuity(token));
@@ -266,8 +266,6 @@ public static partial class DistanceAcuityNotation
     [GeneratedRegex(@"^top(?:\s*line)?:?\s*(?:log\s?mar\s*)?(?<top>" + NotationText.SignedNumber + @")(?:\s*log\s?mar)?\s*[,;+]?\s*(?<n>[0-9]+)\s*letters?(?:\s*(?:correct|read))?$", RegexOptions.CultureInvariant)]
     private static partial Regex LetterScorePattern();
 
-    [GeneratedRegex("^" + NotationText.SignedNumber + "$", RegexOptions.CultureInvariant)]
-    private static partial Regex BareNumberPattern();
 
     /// <summary>A non-chart level followed by anything (e.g. a distance that could not be read).</summary>
     [GeneratedRegex(@"^(?:cf|hm|nlp|npl|lp|pl|count(?:ing)? fingers?|hand (?:motions?|movements?)|(?:no )?light perception)\b", RegexOptions.CultureInvariant)]

@@ -53,7 +53,7 @@ public static partial class DistanceNotation
         var match = DistancePattern().Match(normalised);
         if (!match.Success)
         {
-            var bare = BareNumberPattern().Match(normalised);
+            var bare = NotationText.BareNumberPattern().Match(normalised);
             return bare.Success
                 ? ParseResult.Fail<Distance>(ParseMessages.DistanceNeedsUnit(bare.Value))
                 : ParseResult.Fail<Distance>(ParseMessages.DistanceExpected);
@@ -82,7 +82,4 @@ public static partial class DistanceNotation
 
     [GeneratedRegex("^(?<v>" + NotationText.Number + @")\s*(?<u>" + NotationText.DistanceUnit + ")$", RegexOptions.CultureInvariant)]
     private static partial Regex DistancePattern();
-
-    [GeneratedRegex("^" + NotationText.SignedNumber + "$", RegexOptions.CultureInvariant)]
-    private static partial Regex BareNumberPattern();
 }

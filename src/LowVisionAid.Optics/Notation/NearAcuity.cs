@@ -27,7 +27,9 @@ public readonly record struct NearAcuity
     public Acuity Acuity { get; }
 
     /// <summary>The Snellen-type near acuity V = d / M (d in metres), e.g. 0.4 for 0.40/1.0M.</summary>
-    public double SnellenValue => TestDistance.Metres / Threshold.M;
+    public double SnellenValue =>
+        // V = d / M with d in metres (Colenbrander 2001).
+        TestDistance.Metres / Threshold.M;
 
     /// <summary>
     /// A near-acuity record. The distance must be greater than zero and the equivalent acuity within
@@ -38,12 +40,12 @@ public readonly record struct NearAcuity
     {
         if (!threshold.IsValid)
         {
-            throw new ArgumentOutOfRangeException(nameof(threshold), threshold, "The threshold print size must be greater than zero.");
+            throw new ArgumentOutOfRangeException(nameof(threshold), threshold, "The threshold print size must be greater than zero; enter the smallest print read, such as 1.0M.");
         }
 
         if (!(testDistance.Metres > 0))
         {
-            throw new ArgumentOutOfRangeException(nameof(testDistance), testDistance, "The test distance must be greater than zero.");
+            throw new ArgumentOutOfRangeException(nameof(testDistance), testDistance, "The test distance must be greater than zero; enter the distance the print was read at, such as 40 cm.");
         }
 
         return new NearAcuity(threshold, testDistance, Acuity.FromNearThreshold(threshold, testDistance));

@@ -131,6 +131,10 @@ internal static partial class NotationText
     /// <summary>The shortest text that reads back to exactly the same double (invariant, for stored forms).</summary>
     public static string Exact(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 
+    /// <summary>A number typed on its own, with an optional sign (each parser says what unit or word it needs).</summary>
+    [GeneratedRegex("^" + SignedNumber + "$", RegexOptions.CultureInvariant)]
+    public static partial Regex BareNumberPattern();
+
     [GeneratedRegex(@"\s+", RegexOptions.CultureInvariant)]
     private static partial Regex Spaces();
 }

@@ -102,7 +102,7 @@ public static partial class PrintSizeNotation
             return Read(match, provider, v => v > 0 ? PrintSize.FromXHeightMillimetres(v).M : double.NaN, null);
         }
 
-        var bare = BareNumberPattern().Match(normalised);
+        var bare = NotationText.BareNumberPattern().Match(normalised);
         return ParseResult.Fail<PrintSize>(bare.Success ? ParseMessages.PrintSizeNeedsUnit(bare.Value) : ParseMessages.PrintSizeExpected);
 
         ParseResult<PrintSize> Read(Match m, IFormatProvider? p, Func<double, double> toM, Func<string, string, string>? warning)
@@ -154,7 +154,4 @@ public static partial class PrintSizeNotation
 
     [GeneratedRegex(@"^(?<v>" + NotationText.Number + @")\s*mm(?:\s*x-?height)?$", RegexOptions.CultureInvariant)]
     private static partial Regex MillimetresPattern();
-
-    [GeneratedRegex("^" + NotationText.SignedNumber + "$", RegexOptions.CultureInvariant)]
-    private static partial Regex BareNumberPattern();
 }

@@ -30,7 +30,9 @@ public readonly record struct AcuityReserve : IFormattable
     public double Ratio => _ratioMinusOne + 1.0;
 
     /// <summary>The reserve in log units, log₁₀(R): 0.30 for 2:1, 0.48 for 3:1.</summary>
-    public double LogUnits => Math.Log10(Ratio);
+    public double LogUnits =>
+        // reserve in log units = log₁₀ R (Whittaker and Lovie-Kitchin 1993; +0.30 for 2:1).
+        Math.Log10(Ratio);
 
     /// <summary>A reserve from a ratio between 1 and <see cref="MaximumRatio"/>.</summary>
     public static AcuityReserve FromRatio(double ratio) => ratio is >= 1.0 and <= MaximumRatio

@@ -35,29 +35,29 @@ public readonly record struct Distance : IComparable<Distance>, IFormattable
 
     /// <summary>A distance from a finite number of metres.</summary>
     /// <exception cref="ArgumentOutOfRangeException">The value is NaN or infinite.</exception>
-    public static Distance FromMetres(double metres) => new(Guard.Finite(metres, nameof(metres), "A distance"));
+    public static Distance FromMetres(double metres) => new(Guard.Finite(metres, nameof(metres), "A distance", "40 cm"));
 
     /// <summary>A distance from centimetres.</summary>
     public static Distance FromCentimetres(double centimetres) =>
-        new(Guard.Finite(centimetres, nameof(centimetres), "A distance") / 100.0);
+        new(Guard.Finite(centimetres, nameof(centimetres), "A distance", "40 cm") / 100.0);
 
     /// <summary>A distance from millimetres.</summary>
     public static Distance FromMillimetres(double millimetres) =>
-        new(Guard.Finite(millimetres, nameof(millimetres), "A distance") / 1000.0);
+        new(Guard.Finite(millimetres, nameof(millimetres), "A distance", "40 cm") / 1000.0);
 
     /// <summary>A distance from inches.</summary>
     public static Distance FromInches(double inches) =>
-        new(Guard.Finite(inches, nameof(inches), "A distance") * UnitFactors.MetresPerInch);
+        new(Guard.Finite(inches, nameof(inches), "A distance", "40 cm") * UnitFactors.MetresPerInch);
 
     /// <summary>A distance from feet.</summary>
     public static Distance FromFeet(double feet) =>
-        new(Guard.Finite(feet, nameof(feet), "A distance") * UnitFactors.MetresPerFoot);
+        new(Guard.Finite(feet, nameof(feet), "A distance", "40 cm") * UnitFactors.MetresPerFoot);
 
     /// <summary>The vergence of light at this distance, or the power whose focal length this is: 1/d.</summary>
     /// <exception cref="InvalidOperationException">The distance is zero.</exception>
     public Power Inverse() => IsZero
         ? throw new InvalidOperationException("A distance of zero has no finite vergence.")
-        : Power.FromDioptres(1.0 / _metres);
+        : Power.FromFocalLength(this);
 
     /// <summary>The magnitude of the distance.</summary>
     public Distance Abs() => new(Math.Abs(_metres));

@@ -24,13 +24,15 @@ public readonly record struct Power : IComparable<Power>, IFormattable
 
     /// <summary>A power from a finite number of dioptres.</summary>
     /// <exception cref="ArgumentOutOfRangeException">The value is NaN or infinite.</exception>
-    public static Power FromDioptres(double dioptres) => new(Guard.Finite(dioptres, nameof(dioptres), "A power"));
+    public static Power FromDioptres(double dioptres) => new(Guard.Finite(dioptres, nameof(dioptres), "A power", "+4.00 D"));
 
     /// <summary>The power whose focal length (or the vergence whose distance) is <paramref name="distance"/>: F = 1/f.</summary>
     /// <exception cref="ArgumentException">The distance is zero.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The distance is so short that 1/f is not a finite number.</exception>
     public static Power FromFocalLength(Distance distance) => distance.IsZero
         ? throw new ArgumentException("A focal length of zero has no power; enter a distance greater than zero.", nameof(distance))
-        : new(1.0 / distance.Metres);
+        // F = 1/f, the definition of the dioptre (f in metres); FromDioptres refuses a power too large to be finite.
+        : FromDioptres(1.0 / distance.Metres);
 
     /// <summary>The focal length f = 1/F (signed). </summary>
     /// <exception cref="InvalidOperationException">The power is zero, so the focal length is infinite.</exception>
@@ -42,7 +44,9 @@ public readonly record struct Power : IComparable<Power>, IFormattable
     /// Magnification relative to a reference viewing distance: M = F × d_ref (Bailey 2004 notes).
     /// With 25 cm this is F/4; with 40 cm, F/2.5. Always state the reference used.
     /// </summary>
-    public double MagnificationRelativeTo(Distance reference) => _dioptres * reference.Metres;
+    public double MagnificationRelativeTo(Distance reference) =>
+        // M = Feq × d_ref (Bailey 2004 notes).
+        _dioptres * reference.Metres;
 
     /// <summary>The absolute value of the power.</summary>
     public Power Abs() => new(Math.Abs(_dioptres));

@@ -17,7 +17,9 @@ public readonly record struct PrintSize : IComparable<PrintSize>, IFormattable
     public double M => _m;
 
     /// <summary>The x-height in millimetres.</summary>
-    public double XHeightMillimetres => _m * UnitFactors.MillimetresPerMUnit;
+    public double XHeightMillimetres =>
+        // x-height = M × 1.4544 mm (Sloan 1959).
+        _m * UnitFactors.MillimetresPerMUnit;
 
     /// <summary>The x-height as a distance.</summary>
     public Distance XHeight => Distance.FromMillimetres(XHeightMillimetres);
@@ -26,18 +28,20 @@ public readonly record struct PrintSize : IComparable<PrintSize>, IFormattable
     public bool IsValid => _m > 0;
 
     /// <summary>A print size in M units (greater than zero).</summary>
-    public static PrintSize FromM(double m) => new(Guard.Positive(m, nameof(m), "A print size in M units"));
+    public static PrintSize FromM(double m) => new(Guard.Positive(m, nameof(m), "A print size in M units", "1.0M"));
 
     /// <summary>A print size from its x-height in millimetres (greater than zero).</summary>
     public static PrintSize FromXHeightMillimetres(double millimetres) =>
-        new(Guard.Positive(millimetres, nameof(millimetres), "An x-height") / UnitFactors.MillimetresPerMUnit);
+        // M = x-height / 1.4544 mm (Sloan 1959).
+        new(Guard.Positive(millimetres, nameof(millimetres), "An x-height", "1.45 mm") / UnitFactors.MillimetresPerMUnit);
 
     /// <summary>
     /// A print size from a point size and the typeface's x-height ratio (approximate):
     /// M = pt × 0.35278 × r_x / 1.4544 (derived from the point and M definitions).
     /// </summary>
     public static PrintSize FromPoints(double points, XHeightRatio ratio) =>
-        FromXHeightMillimetres(Guard.Positive(points, nameof(points), "A point size") * UnitFactors.MillimetresPerPoint * ratio.Value);
+        // x-height = pt × 0.35278 mm × r_x, approximate (derived; methods §1.3).
+        FromXHeightMillimetres(Guard.Positive(points, nameof(points), "A point size", "12 pt") * UnitFactors.MillimetresPerPoint * ratio.Value);
 
     /// <summary>
     /// The N-notation size: N is the point size of Times Roman text (Law 1951), so this is
@@ -46,18 +50,22 @@ public readonly record struct PrintSize : IComparable<PrintSize>, IFormattable
     public static PrintSize FromN(double n, XHeightRatio ratio) => FromPoints(n, ratio);
 
     /// <summary>The approximate point size that gives this x-height in a face of the given x-height ratio.</summary>
-    public double ToPoints(XHeightRatio ratio) => XHeightMillimetres / (UnitFactors.MillimetresPerPoint * ratio.Value);
+    public double ToPoints(XHeightRatio ratio) =>
+        // pt = x-height / (0.35278 mm × r_x), approximate (derived; methods §1.3).
+        XHeightMillimetres / (UnitFactors.MillimetresPerPoint * ratio.Value);
 
     /// <summary>
     /// The angle the x-height subtends at <paramref name="distance"/>, in the small-angle form used by M notation:
     /// 5′ × M / d(m) (Sloan; MNREAD print-size definition).
     /// </summary>
     public VisualAngle AngleAt(Distance distance) =>
-        VisualAngle.FromArcminutes(UnitFactors.ArcminutesPerMUnit * _m / Guard.Positive(distance.Metres, nameof(distance), "A viewing distance"));
+        // angle = 5′ × M / d (Sloan; MNREAD print-size definition).
+        VisualAngle.FromArcminutes(UnitFactors.ArcminutesPerMUnit * _m / Guard.Positive(distance.Metres, nameof(distance), "A viewing distance", "40 cm"));
 
     /// <summary>The logMAR equivalent of reading this print at <paramref name="distance"/>: log₁₀(M / d) (Colenbrander 2001).</summary>
     public double LogMarAt(Distance distance) =>
-        Math.Log10(_m / Guard.Positive(distance.Metres, nameof(distance), "A viewing distance"));
+        // logMAR = log₁₀(M / d) (Colenbrander 2001, 1/V = M × D).
+        Math.Log10(_m / Guard.Positive(distance.Metres, nameof(distance), "A viewing distance", "40 cm"));
 
     /// <summary>This print size scaled by a ratio (e.g. divided by an acuity reserve).</summary>
     public PrintSize Scale(double factor) => FromM(_m * factor);

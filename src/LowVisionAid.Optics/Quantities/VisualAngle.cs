@@ -22,7 +22,7 @@ public readonly record struct VisualAngle : IComparable<VisualAngle>, IFormattab
     public static VisualAngle FromArcminutes(double arcminutes) =>
         arcminutes >= 0 && double.IsFinite(arcminutes)
             ? new(arcminutes)
-            : throw new ArgumentOutOfRangeException(nameof(arcminutes), arcminutes, "A visual angle must be a finite number of arcminutes, zero or more.");
+            : throw new ArgumentOutOfRangeException(nameof(arcminutes), arcminutes, "A visual angle must be a finite number of arcminutes, zero or more, such as 12.5 (1M at 40 cm).");
 
     /// <summary>An angle from degrees.</summary>
     public static VisualAngle FromDegrees(double degrees) => FromArcminutes(degrees * 60.0);
@@ -35,7 +35,8 @@ public readonly record struct VisualAngle : IComparable<VisualAngle>, IFormattab
     /// θ = 2·atan(h / 2d) (exact for an object centred on the line of sight).
     /// </summary>
     public static VisualAngle Subtended(Distance size, Distance distance) =>
-        FromRadians(2.0 * Math.Atan(size.Abs().Metres / (2.0 * Guard.Positive(distance.Metres, nameof(distance), "A viewing distance"))));
+        // θ = 2·atan(h / 2d) (plane geometry, object centred on the line of sight).
+        FromRadians(2.0 * Math.Atan(size.Abs().Metres / (2.0 * Guard.Positive(distance.Metres, nameof(distance), "A viewing distance", "40 cm"))));
 
     /// <inheritdoc/>
     public int CompareTo(VisualAngle other) => _arcminutes.CompareTo(other._arcminutes);

@@ -85,8 +85,8 @@ public static class ReadingTestScoring
     /// </summary>
     /// <exception cref="ArgumentOutOfRangeException">The value is not a finite logMAR from −0.5 to 3.0.</exception>
     public static PrintSize ChartPrintSize(double chartLogMar) => chartLogMar is >= Acuity.BestLogMar and <= Acuity.WorstLogMar
-        // M = d × 10^logMAR at the chart's 40 cm (Colenbrander: logMAR = log₁₀(M/d)).
-        ? PrintSize.FromM(ChartDistance.Metres * Math.Pow(10, chartLogMar))
+        // M = d × MAR at the chart's 40 cm (Acuity.ThresholdPrintAt; Colenbrander: logMAR = log₁₀(M/d)).
+        ? Acuity.FromLogMar(chartLogMar).ThresholdPrintAt(ChartDistance)
         : throw new ArgumentOutOfRangeException(nameof(chartLogMar), chartLogMar,
             "Enter the chart's print size label in logMAR from -0.5 to 3.0, such as 0.8.");
 

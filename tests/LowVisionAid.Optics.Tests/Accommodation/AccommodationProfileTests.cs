@@ -27,6 +27,7 @@ public class AccommodationProfileTests
     public void Hofstetter_amplitudes_are_clamped_at_zero_in_old_age(double age)
     {
         Assert.Equal(0.0, Hofstetter.MinimumAmplitude(age).Dioptres);
+        Assert.Equal(0.0, Hofstetter.MeanAmplitude(age + 1.7).Dioptres);
         Assert.Equal(0.0, Hofstetter.MaximumAmplitude(age + 2.5).Dioptres);
     }
 

@@ -30,6 +30,23 @@ public class CommaCultureTests
         Tolerance.Within(metres, near.TestDistance.Metres, 1e-9);
     }
 
+    [Theory]
+    // Same derived values as the invariant tables (M exact; N and pt through r_x 0.50, methods §1.3). Tolerance ±0.0005.
+    [InlineData("1,6M", 1.6)]
+    [InlineData("1.6M", 1.6)]
+    [InlineData("1,4544 mm", 1.0)]
+    [InlineData("8,25 pt", 1.0005)]
+    [InlineData("N 12", 1.4551)]
+    public void Print_sizes_read_with_either_mark(string text, double m) =>
+        Tolerance.Within(m, PrintSizeNotation.Parse(text, German).Value.M, 0.0005, text);
+
+    [Theory]
+    [InlineData("0,4 m", 0.40)]
+    [InlineData("33,3 cm", 0.333)]
+    [InlineData("15,75 in", 0.40005)]
+    public void Distances_read_with_either_mark(string text, double metres) =>
+        Tolerance.Within(metres, DistanceNotation.Parse(text, German).Value.Metres, 1e-9, text);
+
     [Fact]
     public void A_bare_comma_number_is_still_refused_with_both_readings()
     {
@@ -75,6 +92,19 @@ public class CurrentCultureTests
         {
             Assert.Equal(ParseMessages.AmbiguousThousands("7,500"), DistanceAcuityNotation.Parse("6/7,500", null).Error);
             Assert.Equal("0.10 logMAR", DistanceAcuityNotation.Format(DistanceAcuityNotation.Parse("6/7.5", null).Value, AcuityNotation.LogMar, null));
+        }
+    }
+
+    [Fact]
+    public void A_null_provider_reads_print_sizes_distances_and_near_acuity_under_a_comma_culture()
+    {
+        using (new CultureScope("de-DE"))
+        {
+            Tolerance.Within(1.6, PrintSizeNotation.Parse("1,6M", null).Value.M, 1e-12);
+            Tolerance.Within(0.25, DistanceNotation.Parse("0,25 m", null).Value.Metres, 1e-12);
+            Tolerance.Within(2.5, NearAcuityNotation.Parse("2,5M at 0,4 m", null).Value.Threshold.M, 1e-12);
+            Assert.Equal(ParseMessages.AmbiguousThousands("1.000"), DistanceNotation.Parse("1.000 m", null).Error);
+            Assert.Equal("1,6M at 25 cm", NearAcuityNotation.Format(NearAcuityNotation.Parse("1,6M @ 25cm", null).Value, null));
         }
     }
 

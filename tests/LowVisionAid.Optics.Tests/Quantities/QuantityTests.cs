@@ -36,6 +36,30 @@ public class QuantityTests
     }
 
     [Fact]
+    public void One_millimetre_of_letter_height_is_about_0_7_M()
+    {
+        // Jose and Atcherson 1977 (methods §1.2): 1 mm of letter height ≈ 0.7M; exactly 1 / 1.4544 = 0.688M (derived).
+        // Tolerance ±0.05M for the published rounding, ±0.001M for the derived value.
+        Tolerance.Within(0.7, PrintSize.FromXHeightMillimetres(1).M, 0.05);
+        Tolerance.Within(0.688, PrintSize.FromXHeightMillimetres(1).M, 0.001);
+    }
+
+    [Theory]
+    // Legge and Bigelow 2011 (methods §1.3): the fluent range is x-height 0.2° to 2°, which is 1.4 to 14 mm at 40 cm
+    // (≈ 1M to 10M). Derived check of the angle formula 5′ × M / d; tolerance ±0.01° (the source rounds to 1.4 and 14 mm).
+    [InlineData(1.4, 0.2)]
+    [InlineData(14.0, 2.0)]
+    public void The_fluent_print_range_at_40_cm_is_0_2_to_2_degrees(double xHeightMillimetres, double degrees) =>
+        Tolerance.Within(degrees, PrintSize.FromXHeightMillimetres(xHeightMillimetres).AngleAt(Distance.FromCentimetres(40)).Degrees, 0.01);
+
+    [Fact]
+    public void A_letter_1_4544_mm_high_at_1_m_subtends_5_arcminutes_by_the_exact_angle_formula()
+    {
+        // Sloan 1959: 1M subtends 5′ at 1 m (CV-03); θ = 2·atan(h / 2d) agrees with the small-angle M form to ±0.001′.
+        Tolerance.Within(5.0, VisualAngle.Subtended(PrintSize.FromM(1).XHeight, Distance.FromMetres(1)).Arcminutes, 0.001);
+    }
+
+    [Fact]
     public void Default_x_height_ratio_is_the_conventional_half()
     {
         // Methods §1.3: r_x = 0.50 is the "1M ≈ 8 pt" convention (common practice).

@@ -32,7 +32,7 @@ public class EstimateReconciliationTests
     [Fact]
     public void Estimates_within_0_2_log_units_are_shown_but_not_flagged()
     {
-        // CV-12 (CPS 4M at 40 cm → 10 D) against CV-06 20/200 → 10 D, and near 4M at 40 cm 1:1 for 1M → 10 D (derived): no gap.
+        // CV-12 (CPS 4M at 40 cm → 10 D), CV-06 (20/200 → 10 D) and near 5M at 40 cm 1:1 for 1M → 12.5 D (derived): no pair flagged.
         var estimates = new[]
         {
             CriticalPrintSizeMethod.Estimate(PrintSize.FromM(4), At40Cm, PrintSize.FromM(1)),

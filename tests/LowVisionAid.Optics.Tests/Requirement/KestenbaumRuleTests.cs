@@ -27,6 +27,8 @@ public class KestenbaumRuleTests
 
         Assert.Equal(1.0, estimate.TargetPrint.M);
         Assert.Equal(1.0, estimate.Reserve!.Value.Ratio);
+        // At the 10 cm EVD the 50′ threshold letter is 1M: M = d × MAR = 0.10 × 10 (derived, methods §2.1). ±1e-9.
+        Tolerance.Within(1.0, Acuity.FromSnellen(20, 200).ThresholdPrintAt(estimate.EquivalentViewingDistance).M, 1e-9);
         Assert.Contains(estimate.Assumptions, a => a.Contains("1M", StringComparison.Ordinal) && a.Contains("no acuity reserve", StringComparison.Ordinal));
         Assert.Contains(estimate.Assumptions, a => a.Contains("central scotoma", StringComparison.Ordinal));
     }

@@ -55,7 +55,10 @@ public class ReadingCurveTests
         Tolerance.Within(10.0, estimate.EquivalentPower.Dioptres, 1e-9);
         Tolerance.Within(10.0, estimate.EquivalentViewingDistance.Centimetres, 1e-9);
         Assert.Null(estimate.Reserve);
-        Assert.Contains(estimate.Assumptions, a => a.Contains("Maximum reading speed 78 words per minute", StringComparison.Ordinal));
+        // The MRS stated is the mean model speed at the sizes above P_c (1.3, 1.2 and 1.1 logMAR; the rule's definition).
+        var mrs = ModelCurve(80.0, 0.5, 1.0).Where(p => p.PrintSize.M > 4.0 + 1e-9).Average(p => p.WordsPerMinute);
+        var stated = "Maximum reading speed " + mrs.ToString("0", CultureInfo.InvariantCulture) + " words per minute";
+        Assert.Contains(estimate.Assumptions, a => a.Contains(stated, StringComparison.Ordinal));
     }
 
     [Fact]

@@ -14,7 +14,7 @@ public class RelativeMagnificationTests
         Tolerance.Within(times, RelativeMagnification.FromDistanceChange(Distance.FromMetres(fromMetres), Distance.FromMetres(toMetres)), 1e-9);
 
     [Fact]
-    public void Reading_at_10_cm_needs_4_D_more_focus_than_at_40_cm()
+    public void Reading_at_10_cm_needs_10_D_of_focus_and_at_40_cm_2_5_D()
     {
         // Ryan and Margrain 2006: relative distance needs accommodation or an add of 1 / new distance: 10 D at 10 cm,
         // 2.5 D at 40 cm (derived). Exact (±1e-9).

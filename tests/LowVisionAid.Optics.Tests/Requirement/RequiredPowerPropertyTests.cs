@@ -8,6 +8,8 @@ namespace LowVisionAid.Optics.Tests.Requirement;
 /// <summary>Laws that follow from the formulas of methods §2 (derived), checked over wide input ranges.</summary>
 public class RequiredPowerPropertyTests
 {
+    private const int Many = 5_000;
+
     private static readonly Gen<double> ThresholdM = Gen.Double[0.4, 20.0];
     private static readonly Gen<double> TargetM = Gen.Double[0.4, 10.0];
     private static readonly Gen<double> TestCm = Gen.Double[5.0, 100.0];
@@ -22,7 +24,7 @@ public class RequiredPowerPropertyTests
             var withReserve = NearAcuityMethod.Estimate(PrintSize.FromM(th), Distance.FromCentimetres(cm), PrintSize.FromM(target), AcuityReserve.FromRatio(r));
             var atThreshold = NearAcuityMethod.Estimate(PrintSize.FromM(th), Distance.FromCentimetres(cm), PrintSize.FromM(target), AcuityReserve.Spot);
             Tolerance.WithinRelative(r, withReserve.EquivalentPower / atThreshold.EquivalentPower, 1e-12);
-        });
+        }, iter: Many);
 
     [Fact]
     public void Near_method_power_is_inversely_proportional_to_the_target_size() =>
@@ -32,7 +34,7 @@ public class RequiredPowerPropertyTests
             var a = NearAcuityMethod.Estimate(PrintSize.FromM(th), Distance.FromCentimetres(cm), PrintSize.FromM(target), AcuityReserve.FromRatio(r));
             var b = NearAcuityMethod.Estimate(PrintSize.FromM(th), Distance.FromCentimetres(cm), PrintSize.FromM(target * 2), AcuityReserve.FromRatio(r));
             Tolerance.WithinRelative(2.0, a.EquivalentPower / b.EquivalentPower, 1e-12);
-        });
+        }, iter: Many);
 
     [Fact]
     public void Equivalent_viewing_distance_and_power_are_reciprocal() =>
@@ -43,7 +45,7 @@ public class RequiredPowerPropertyTests
             Tolerance.WithinRelative(1.0, estimate.EquivalentViewingDistance.Metres * estimate.EquivalentPower.Dioptres, 1e-12);
             // EVD_req = d × M_t / (M_th × R) (methods §2.2).
             Tolerance.WithinRelative(cm / 100.0 * target / (th * r), estimate.EquivalentViewingDistance.Metres, 1e-12);
-        });
+        }, iter: Many);
 
     [Fact]
     public void Kestenbaum_general_form_with_1_to_1_and_1M_equals_the_classic_rule() =>
@@ -52,8 +54,11 @@ public class RequiredPowerPropertyTests
         {
             var acuity = Acuity.FromLogMar(logMar);
             var general = KestenbaumRule.WithReserve(acuity, PrintSize.FromM(1), AcuityReserve.Spot);
-            Tolerance.WithinRelative(KestenbaumRule.Classic(acuity).EquivalentPower.Dioptres, general.EquivalentPower.Dioptres, 1e-12);
-        });
+            // Both equal 1 / V_dec = 10^logMAR (Kestenbaum and Sturman 1956).
+            var expected = Math.Pow(10, logMar);
+            Tolerance.WithinRelative(expected, KestenbaumRule.Classic(acuity).EquivalentPower.Dioptres, 1e-12);
+            Tolerance.WithinRelative(expected, general.EquivalentPower.Dioptres, 1e-12);
+        }, iter: Many);
 
     [Fact]
     public void Kestenbaum_matches_the_near_method_when_near_threshold_equals_the_distance_acuity() =>
@@ -63,9 +68,13 @@ public class RequiredPowerPropertyTests
             var acuity = Acuity.FromLogMar(logMar);
             var distance = Distance.FromCentimetres(cm);
             var kestenbaum = KestenbaumRule.WithReserve(acuity, PrintSize.FromM(target), AcuityReserve.FromRatio(r));
-            var near = NearAcuityMethod.Estimate(acuity.ThresholdPrintAt(distance), distance, PrintSize.FromM(target), AcuityReserve.FromRatio(r));
-            Tolerance.WithinRelative(kestenbaum.EquivalentPower.Dioptres, near.EquivalentPower.Dioptres, 1e-9);
-        });
+            var threshold = PrintSize.FromM(cm / 100.0 * Math.Pow(10, logMar));
+            var near = NearAcuityMethod.Estimate(threshold, distance, PrintSize.FromM(target), AcuityReserve.FromRatio(r));
+            // Both equal MAR × R / M_t = 10^logMAR × R / M_t (methods §2.1 and §2.2, derived).
+            var expected = Math.Pow(10, logMar) * r / target;
+            Tolerance.WithinRelative(expected, kestenbaum.EquivalentPower.Dioptres, 1e-9);
+            Tolerance.WithinRelative(expected, near.EquivalentPower.Dioptres, 1e-9);
+        }, iter: Many);
 
     [Fact]
     public void A_critical_print_size_of_R_times_threshold_gives_the_near_method_with_reserve_R() =>
@@ -75,8 +84,10 @@ public class RequiredPowerPropertyTests
             var distance = Distance.FromCentimetres(cm);
             var cps = CriticalPrintSizeMethod.Estimate(PrintSize.FromM(th * r), distance, PrintSize.FromM(target));
             var near = NearAcuityMethod.Estimate(PrintSize.FromM(th), distance, PrintSize.FromM(target), AcuityReserve.FromRatio(r));
-            Tolerance.WithinRelative(near.EquivalentPower.Dioptres, cps.EquivalentPower.Dioptres, 1e-12);
-        });
+            var expected = th * r / (cm / 100.0 * target);
+            Tolerance.WithinRelative(expected, cps.EquivalentPower.Dioptres, 1e-12);
+            Tolerance.WithinRelative(expected, near.EquivalentPower.Dioptres, 1e-12);
+        }, iter: Many);
 
     [Fact]
     public void Magnification_is_power_times_the_reference_distance() =>
@@ -86,7 +97,7 @@ public class RequiredPowerPropertyTests
             var estimate = NearAcuityMethod.Estimate(PrintSize.FromM(th), Distance.FromCentimetres(cm), PrintSize.FromM(1), AcuityReserve.Fluent)
                 .WithReference(Distance.FromCentimetres(referenceCm));
             Tolerance.WithinRelative(estimate.EquivalentPower.Dioptres * referenceCm / 100.0, estimate.Magnification, 1e-12);
-        });
+        }, iter: Many);
 
     [Fact]
     public void A_pair_is_flagged_exactly_when_its_powers_differ_by_more_than_0_2_log_units_in_either_order() =>
@@ -104,5 +115,5 @@ public class RequiredPowerPropertyTests
 
             Assert.Equal(gap > 0.2, EstimateReconciliation.Compare([a, b]).HasDisagreement);
             Assert.Equal(gap > 0.2, EstimateReconciliation.Compare([b, a]).HasDisagreement);
-        });
+        }, iter: Many);
 }
