@@ -36,7 +36,7 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             return null;
         }
 
-        var settings = await db.Settings.AsNoTracking().FirstOrDefaultAsync(ct).ConfigureAwait(false)
+        var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false)
             ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
         return Read(plan, plan.Visit, plan.Visit.Client, settings);
     }
