@@ -1,0 +1,111 @@
+using LowVisionAid.Optics.Devices;
+using LowVisionAid.Optics.Quantities;
+
+namespace LowVisionAid.Optics.Options;
+
+/// <summary>
+/// Option 8: a telescope for television, faces and signs: magnification from current and goal acuity, its design and
+/// length, its field and the focusing needed for the object distance (methods §3.5). Never while walking; driving
+/// rules with aids differ by jurisdiction.
+/// </summary>
+public sealed record DistanceTelescopeOption : MagnifierOption
+{
+    /// <summary>Telescope magnifications considered for distance, smallest first (common stock sizes; assumption).</summary>
+    public static IReadOnlyList<double> StockMagnifications { get; } = [2.0, 2.5, 3.0, 3.5, 4.0, 6.0, 8.0, 10.0];
+
+    /// <inheritdoc/>
+    public override OptionKind Kind => OptionKind.DistanceTelescope;
+
+    /// <summary>Magnification needed: MAR_current ÷ MAR_goal.</summary>
+    public required double MagnificationNeeded { get; init; }
+
+    /// <summary>Magnification chosen (or the kit's).</summary>
+    public required double Magnification { get; init; }
+
+    /// <summary>Galilean up to 4×, Keplerian above (methods §3.5).</summary>
+    public required TelescopeDesign Design { get; init; }
+
+    /// <summary>Tube length with the plan's assumed objective.</summary>
+    public required Distance Length { get; init; }
+
+    /// <summary>Real angular field.</summary>
+    public required VisualAngle RealField { get; init; }
+
+    /// <summary>The object distance (the preferred viewing distance).</summary>
+    public required Distance ObjectDistance { get; init; }
+
+    /// <summary>Extra focusing needed at the eye for that object with the telescope set for infinity: −L′/(1 − eL′).</summary>
+    public required Power FocusForObject { get; init; }
+
+    /// <summary>Builds the option; <paramref name="kitMagnification"/> replaces the stock choice for a kit device.</summary>
+    public static DistanceTelescopeOption Create(OptionContext context, Acuity current, Acuity goal, double? kitMagnification = null, VisualAngle? statedField = null, string? kitId = null)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var s = context.Settings;
+        var needed = Telescope.MagnificationFor(current, goal);
+        var stock = StockMagnifications;
+        var m = kitMagnification ?? stock[^1];
+        if (kitMagnification is null)
+        {
+            for (var i = 0; i < stock.Count; i++)
+            {
+                if (stock[i] >= needed)
+                {
+                    m = stock[i];
+                    break;
+                }
+            }
+        }
+
+        var design = m <= Telescope.GalileanPracticalLimit ? TelescopeDesign.Galilean : TelescopeDesign.Keplerian;
+        var telescope = Telescope.ForMagnification(m, design, s.TelescopeObjective);
+        var d = context.Preferred;
+        var objectDistance = OptionContext.Metres(d);
+        var real = statedField ?? telescope.RealField(s.TelescopeApparentField);
+        // Angular magnification seen as an equivalent viewing distance: EVD = d/M, so F_eq = M/d (Bailey)
+        var delivered = m / d;
+        var required = needed / d;
+        // Depth of field in object space: the eye's blur tolerance shrinks by M² through the telescope (derived, L′ ≈ M²L)
+        var depth = OptionContext.DepthOfField(1.0 / d, s.BlurTolerance.Dioptres / (m * m));
+        var practical = m >= needed * s.PowerTolerance || kitMagnification is not null;
+        return new DistanceTelescopeOption
+        {
+            KitDeviceId = kitId,
+            RequiredPower = OptionContext.Dioptres(required),
+            DeliveredPower = OptionContext.Dioptres(delivered),
+            MeetsRequiredPower = context.Meets(delivered, required),
+            IsPractical = practical,
+            PracticalNote = practical ? null : Texts.TelescopeBeyondRange,
+            WorkingDistance = objectDistance,
+            EyeToLens = s.TelescopeEyeRelief,
+            LinearField = FieldOfView.LinearFieldOfAngle(real, objectDistance),
+            DepthOfField = depth,
+            Binocular = context.TwoEyes
+                ? new BinocularUse(true, Convergence.FromCentresOfRotation(context.Constraints.InterpupillaryDistance, objectDistance), null)
+                : new BinocularUse(false, 0, null),
+            AccommodationOrAddNeeded = telescope.FocusDemandAtEye(objectDistance, s.TelescopeEyeRelief),
+            LightAndContrast = Texts.LightDistance,
+            HandsFree = false,
+            SuitsTremor = false,
+            Posture = Texts.PostureDistanceTelescope,
+            MagnificationNeeded = needed,
+            Magnification = m,
+            Design = design,
+            Length = telescope.Length,
+            RealField = real,
+            ObjectDistance = objectDistance,
+            FocusForObject = telescope.FocusDemandAtEye(objectDistance, s.TelescopeEyeRelief),
+        };
+    }
+
+    /// <inheritdoc/>
+    public override string Summary(IFormatProvider provider) => string.Format(
+        provider,
+        "{0} telescope {1:0.#}× ({2:0.0} cm long), field about {3:0.0}°: focus {4:+0.00} D nearer for {5:0.0} m. Never use it while walking.",
+        Design == TelescopeDesign.Galilean ? "Galilean" : "Keplerian",
+        Magnification,
+        Length.Centimetres,
+        RealField.Degrees,
+        FocusForObject.Dioptres,
+        ObjectDistance.Metres);
+}
