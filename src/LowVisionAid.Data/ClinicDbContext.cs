@@ -34,6 +34,7 @@ public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, T
         configurationBuilder.Properties<PrintSize>().HaveConversion<PrintSizeConverter>();
         configurationBuilder.Properties<Acuity>().HaveConversion<AcuityConverter>();
         configurationBuilder.Properties<AcuityReserve>().HaveConversion<AcuityReserveConverter>();
+        configurationBuilder.Properties<VisualAngle>().HaveConversion<VisualAngleConverter>();
         configurationBuilder.Properties<Enum>().HaveConversion<string>().HaveMaxLength(40);
     }
 

@@ -1,5 +1,6 @@
 using System.Globalization;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Kit;
 using Microsoft.AspNetCore.Mvc.Rendering;
 
 namespace LowVisionAid.Web;
@@ -64,15 +65,14 @@ internal static class Labels
         _ => lighting.ToString(),
     };
 
-    public static string Kind(KitDeviceKind kind) => kind switch
+    public static string Kind(DeviceKind kind) => kind switch
     {
-        KitDeviceKind.SpectacleAdd => "Reading spectacles (high add)",
-        KitDeviceKind.HandMagnifier => "Hand magnifier",
-        KitDeviceKind.StandMagnifier => "Stand magnifier",
-        KitDeviceKind.NearTelescope => "Near telescope",
-        KitDeviceKind.DistanceTelescope => "Distance telescope",
-        KitDeviceKind.VideoMagnifier => "Video magnifier",
-        KitDeviceKind.Other => "Other",
+        DeviceKind.SpectacleAdd => "Reading spectacles (high add)",
+        DeviceKind.HandMagnifier => "Hand magnifier",
+        DeviceKind.StandMagnifier => "Stand magnifier",
+        DeviceKind.NearTelescope => "Near telescope",
+        DeviceKind.DistanceTelescope => "Distance telescope",
+        DeviceKind.VideoMagnifier => "Video magnifier",
         _ => kind.ToString(),
     };
 

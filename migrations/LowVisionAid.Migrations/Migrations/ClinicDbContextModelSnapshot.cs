@@ -138,8 +138,20 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<DateTime>("CreatedUtc")
                         .HasColumnType("TEXT");
 
+                    b.Property<double?>("EnlargementRatio")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("Field")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("FocusNearest")
+                        .HasColumnType("REAL");
+
                     b.Property<bool>("Illuminated")
                         .HasColumnType("INTEGER");
+
+                    b.Property<double?>("ImageBelowLens")
+                        .HasColumnType("REAL");
 
                     b.Property<int>("InStock")
                         .HasColumnType("INTEGER");
@@ -152,9 +164,15 @@ namespace LowVisionAid.Migrations.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
-                    b.Property<string>("MagnificationRange")
-                        .HasMaxLength(60)
+                    b.Property<string>("LabelConvention")
+                        .HasMaxLength(40)
                         .HasColumnType("TEXT");
+
+                    b.Property<double?>("LabelTimes")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("Magnification")
+                        .HasColumnType("REAL");
 
                     b.Property<string>("Name")
                         .IsRequired()
@@ -166,6 +184,12 @@ namespace LowVisionAid.Migrations.Migrations
                         .HasColumnType("TEXT");
 
                     b.Property<double?>("Power")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("ReadingCap")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("StandHeight")
                         .HasColumnType("REAL");
 
                     b.Property<DateTime>("UpdatedUtc")
@@ -445,10 +469,13 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<int>("Position")
                         .HasColumnType("INTEGER");
 
-                    b.Property<double>("TargetPrint")
+                    b.Property<double?>("TargetAcuity")
                         .HasColumnType("REAL");
 
-                    b.Property<string>("TargetPrintText")
+                    b.Property<double?>("TargetPrint")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("TargetText")
                         .IsRequired()
                         .HasMaxLength(60)
                         .HasColumnType("TEXT");

@@ -11,7 +11,6 @@ internal sealed class KitDeviceConfiguration : IEntityTypeConfiguration<KitDevic
         builder.Property(k => k.Code).HasMaxLength(FieldLimits.Code).UseCollation("NOCASE");
         builder.HasIndex(k => k.Code).IsUnique();
         builder.Property(k => k.Name).HasMaxLength(FieldLimits.Name);
-        builder.Property(k => k.MagnificationRange).HasMaxLength(FieldLimits.Measurement);
         builder.Property(k => k.Notes).HasMaxLength(FieldLimits.Notes);
         builder.Property(k => k.Version).IsConcurrencyToken();
     }

@@ -9,6 +9,6 @@ internal sealed class VisitGoalConfiguration : IEntityTypeConfiguration<VisitGoa
     public void Configure(EntityTypeBuilder<VisitGoal> builder)
     {
         builder.Property(g => g.Detail).HasMaxLength(FieldLimits.Name);
-        builder.Property(g => g.TargetPrintText).HasMaxLength(FieldLimits.Measurement);
+        builder.Property(g => g.TargetText).HasMaxLength(FieldLimits.Measurement);
     }
 }

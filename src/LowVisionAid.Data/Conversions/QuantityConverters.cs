@@ -20,3 +20,6 @@ public sealed class AcuityConverter() : ValueConverter<Acuity, double>(a => a.Lo
 
 /// <summary>Stores an <see cref="AcuityReserve"/> as its ratio (2 for 2:1).</summary>
 public sealed class AcuityReserveConverter() : ValueConverter<AcuityReserve, double>(r => r.Ratio, r => AcuityReserve.FromRatio(r));
+
+/// <summary>Stores a <see cref="VisualAngle"/> as arcminutes.</summary>
+public sealed class VisualAngleConverter() : ValueConverter<VisualAngle, double>(a => a.Arcminutes, m => VisualAngle.FromArcminutes(m));

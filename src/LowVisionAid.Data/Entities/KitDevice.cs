@@ -1,3 +1,5 @@
+using LowVisionAid.Optics.Devices;
+using LowVisionAid.Optics.Kit;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Data.Entities;
@@ -12,16 +14,38 @@ public sealed class KitDevice : IVersioned
 
     public required string Name { get; set; }
 
-    public KitDeviceKind Kind { get; set; }
+    public DeviceKind Kind { get; set; }
 
-    /// <summary>Equivalent power of the lens, when it has one.</summary>
+    /// <summary>Equivalent power of the lens (or the add), when known.</summary>
     public Power? Power { get; set; }
 
-    /// <summary>Lens diameter (or screen width for a video magnifier).</summary>
+    /// <summary>The "×" on the label, read only with its convention (a "×" alone is never a power).</summary>
+    public double? LabelTimes { get; set; }
+
+    public LabelConvention? LabelConvention { get; set; }
+
+    /// <summary>Clear lens aperture.</summary>
     public Distance? Aperture { get; set; }
 
-    /// <summary>For a video magnifier: its magnification range as typed (e.g. "3–20×").</summary>
-    public string? MagnificationRange { get; set; }
+    /// <summary>Stand magnifier: page-to-lens height.</summary>
+    public Distance? StandHeight { get; set; }
+
+    /// <summary>Stand magnifier: image position below the lens (with the enlargement ratio).</summary>
+    public Distance? ImageBelowLens { get; set; }
+
+    public double? EnlargementRatio { get; set; }
+
+    /// <summary>Telescopes and video magnifiers: magnification (for a video magnifier, its largest).</summary>
+    public double? Magnification { get; set; }
+
+    /// <summary>Near telescope: reading cap power.</summary>
+    public Power? ReadingCap { get; set; }
+
+    /// <summary>Telescope: angular field.</summary>
+    public VisualAngle? Field { get; set; }
+
+    /// <summary>Distance telescope: nearest focus.</summary>
+    public Distance? FocusNearest { get; set; }
 
     public bool Illuminated { get; set; }
 
@@ -36,16 +60,4 @@ public sealed class KitDevice : IVersioned
     public DateTime CreatedUtc { get; set; }
 
     public DateTime UpdatedUtc { get; set; }
-}
-
-/// <summary>The kinds of device a kit holds.</summary>
-public enum KitDeviceKind
-{
-    SpectacleAdd,
-    HandMagnifier,
-    StandMagnifier,
-    NearTelescope,
-    DistanceTelescope,
-    VideoMagnifier,
-    Other,
 }

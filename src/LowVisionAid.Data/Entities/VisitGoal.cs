@@ -17,9 +17,17 @@ public sealed class VisitGoal
     /// <summary>What exactly, in the client's words (e.g. "bus timetable"), optional.</summary>
     public string? Detail { get; set; }
 
-    public required string TargetPrintText { get; set; }
+    /// <summary>The target as typed: a print size, or for a distance task (television, faces) the acuity wanted.</summary>
+    public required string TargetText { get; set; }
 
-    public PrintSize TargetPrint { get; set; }
+    /// <summary>The print size the task needs (near tasks).</summary>
+    public PrintSize? TargetPrint { get; set; }
+
+    /// <summary>The distance acuity the task needs (distance tasks such as television), e.g. 6/12.</summary>
+    public Acuity? TargetAcuity { get; set; }
+
+    /// <summary>Television and faces are seen at a distance; every other task is near work.</summary>
+    public static bool IsDistanceTask(GoalTask task) => task is GoalTask.Television or GoalTask.Faces;
 }
 
 /// <summary>The everyday tasks clients most often bring.</summary>

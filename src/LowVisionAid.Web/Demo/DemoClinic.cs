@@ -1,6 +1,8 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using LowVisionAid.Optics.Quantities;
+using LowVisionAid.Web.Pages.Plans;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Demo;
@@ -9,7 +11,7 @@ namespace LowVisionAid.Web.Demo;
 /// An invented clinic, so that a newcomer lands in a working app. Every person and figure here is made up;
 /// the records are marked as demo and Settings removes them.
 /// </summary>
-public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
+public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanHandler makePlan)
 {
     public const string ClinicName = "Harbour Lane Low Vision Clinic (demo)";
 
@@ -26,6 +28,37 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
         db.KitDevices.AddRange(Kit());
         db.Clients.AddRange(Clients(today));
         await db.SaveChangesAsync(ct).ConfigureAwait(false);
+
+        // Plans are made by the real planner from the demo visits, as a clinician would make them.
+        var visits = await db.Visits.Where(v => v.Client!.IsDemo).OrderBy(v => v.Id).Select(v => new { v.Id, v.VisitDate }).ToListAsync(ct).ConfigureAwait(false);
+        var planIds = new List<int>();
+        foreach (var visit in visits)
+        {
+            if (await makePlan.HandleAsync(visit.Id, ct).ConfigureAwait(false) is { PlanId: { } planId })
+            {
+                planIds.Add(planId);
+            }
+        }
+
+        if (planIds.Count > 0)
+        {
+            var lens = await db.KitDevices.FirstAsync(k => k.Code == "HM-12L", ct).ConfigureAwait(false);
+            db.Trials.Add(new Trial
+            {
+                PlanId = planIds[0],
+                TrialDate = visits[0].VisitDate,
+                KitDeviceId = lens.Id,
+                DeviceDescription = $"{lens.Name} ({lens.Code})",
+                Task = GoalTask.Newspaper,
+                ResultText = "1M",
+                ResultWordsPerMinute = 68,
+                ClientComment = "Invented demo comment: the light helps.",
+                Outcome = TrialOutcome.Loaned,
+                FollowUpDue = today.AddDays(7),
+            });
+            await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        }
+
         return true;
     }
 
@@ -60,21 +93,21 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
 
     private static IEnumerable<KitDevice> Kit() =>
     [
-        Device("HM-08", "Hand magnifier +8 D, 75 mm", KitDeviceKind.HandMagnifier, 8, 75, false),
-        Device("HM-12L", "Lit hand magnifier +12 D, 60 mm", KitDeviceKind.HandMagnifier, 12, 60, true),
-        Device("HM-20L", "Lit hand magnifier +20 D, 45 mm", KitDeviceKind.HandMagnifier, 20, 45, true),
-        Device("SM-12L", "Lit stand magnifier +12 D, 70 mm", KitDeviceKind.StandMagnifier, 12, 70, true),
-        Device("SM-24L", "Lit stand magnifier +24 D, 50 mm", KitDeviceKind.StandMagnifier, 24, 50, true),
-        Device("SP-08", "Reading spectacles +8.00 D add", KitDeviceKind.SpectacleAdd, 8, null, false),
-        Device("SP-12", "Reading spectacles +12.00 D add, prism half-eyes", KitDeviceKind.SpectacleAdd, 12, null, false),
+        Device("HM-08", "Hand magnifier +8 D, 75 mm", DeviceKind.HandMagnifier, 8, 75, false),
+        Device("HM-12L", "Lit hand magnifier +12 D, 60 mm", DeviceKind.HandMagnifier, 12, 60, true),
+        Device("HM-20L", "Lit hand magnifier +20 D, 45 mm", DeviceKind.HandMagnifier, 20, 45, true),
+        Stand("SM-12L", "Lit stand magnifier +12 D, 70 mm", 12, 70, 6.5),
+        Stand("SM-24L", "Lit stand magnifier +24 D, 50 mm", 24, 50, 3.5),
+        Device("SP-08", "Reading spectacles +8.00 D add", DeviceKind.SpectacleAdd, 8, null, false),
+        Device("SP-12", "Reading spectacles +12.00 D add, prism half-eyes", DeviceKind.SpectacleAdd, 12, null, false),
         new KitDevice
         {
-            Code = "VM-DESK", Name = "Desktop video magnifier, 24 in screen", Kind = KitDeviceKind.VideoMagnifier,
-            MagnificationRange = "3–40×", Illuminated = true, InStock = 1, IsDemo = true,
+            Code = "VM-DESK", Name = "Desktop video magnifier, 24 in screen", Kind = DeviceKind.VideoMagnifier,
+            Magnification = 40, Illuminated = true, InStock = 1, IsDemo = true,
         },
     ];
 
-    private static KitDevice Device(string code, string name, KitDeviceKind kind, double dioptres, double? apertureMm, bool lit) => new()
+    private static KitDevice Device(string code, string name, DeviceKind kind, double dioptres, double? apertureMm, bool lit) => new()
     {
         Code = code,
         Name = name,
@@ -85,6 +118,13 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
         InStock = 2,
         IsDemo = true,
     };
+
+    private static KitDevice Stand(string code, string name, double dioptres, double apertureMm, double heightCm)
+    {
+        var device = Device(code, name, DeviceKind.StandMagnifier, dioptres, apertureMm, true);
+        device.StandHeight = Distance.FromCentimetres(heightCm);
+        return device;
+    }
 
     private static IEnumerable<Client> Clients(DateOnly today)
     {
@@ -150,7 +190,7 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock)
         };
         for (var i = 0; i < goals.Length; i++)
         {
-            visit.Goals.Add(new VisitGoal { Position = i, Task = goals[i].Task, Detail = goals[i].Detail, TargetPrintText = goals[i].PrintText, TargetPrint = PrintSize.FromM(goals[i].M) });
+            visit.Goals.Add(new VisitGoal { Position = i, Task = goals[i].Task, Detail = goals[i].Detail, TargetText = goals[i].PrintText, TargetPrint = PrintSize.FromM(goals[i].M) });
         }
 
         return visit;

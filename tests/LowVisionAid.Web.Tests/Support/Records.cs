@@ -1,4 +1,6 @@
 using LowVisionAid.Data.Entities;
+using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
+using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Web.Tests.Support;
 
@@ -27,10 +29,10 @@ public static class Records
             return (client.Id, visit.Plans[0].Id);
         });
 
-    public static Task<int> KitDeviceAsync(this ClinicApp app, string code, string name) =>
+    public static Task<int> KitDeviceAsync(this ClinicApp app, string code, string name, double dioptres = 12) =>
         app.WithDbAsync(async db =>
         {
-            var device = new KitDevice { Code = code, Name = name, Kind = KitDeviceKind.HandMagnifier };
+            var device = new KitDevice { Code = code, Name = name, Kind = DeviceKind.HandMagnifier, Power = Power.FromDioptres(dioptres), Aperture = Distance.FromMillimetres(50) };
             db.KitDevices.Add(device);
             await db.SaveChangesAsync();
             return device.Id;

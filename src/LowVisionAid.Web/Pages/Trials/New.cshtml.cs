@@ -16,6 +16,14 @@ public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler h
     [BindProperty]
     public TrialInput Input { get; set; } = new();
 
+    /// <summary>A kit code chosen on the plan, to preselect (GET only).</summary>
+    [FromQuery(Name = "kit")]
+    public string? Kit { get; set; }
+
+    /// <summary>An option chosen on the plan, to prefill the device (GET only).</summary>
+    [FromQuery(Name = "device")]
+    public string? Device { get; set; }
+
     public TrialContext Context { get; private set; } = null!;
 
     public static IReadOnlyList<SelectListItem> TaskChoices { get; } =
@@ -32,6 +40,8 @@ public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler h
         }
 
         Input.TrialDate = DateOnly.FromDateTime(clock.GetLocalNow().DateTime).ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+        Input.KitDeviceId = Kit is null ? null : await handler.KitIdAsync(Kit, ct).ConfigureAwait(false);
+        Input.DeviceDescription = Input.KitDeviceId is null ? Device : null;
         return Page();
     }
 

@@ -27,6 +27,10 @@ public sealed class NewTrialHandler(ClinicDbContext db)
         return new(plan.Id, plan.VisitId, plan.ClientId, plan.Code, [new SelectListItem("Not from the kit (type it below)", ""), .. kit]);
     }
 
+    public async Task<string?> KitIdAsync(string code, CancellationToken ct) =>
+        (await db.KitDevices.AsNoTracking().Where(k => k.Code == code).Select(k => (int?)k.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false))
+        ?.ToString(CultureInfo.InvariantCulture);
+
     /// <summary>Saves the trial; returns null and an error when the chosen kit device has gone.</summary>
     public async Task<(int? Id, string? KitError)> HandleAsync(int planId, TrialInput input, CancellationToken ct)
     {

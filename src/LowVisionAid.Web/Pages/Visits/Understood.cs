@@ -34,7 +34,15 @@ internal static class Understood
         Add(rows, "Preferred working distance", input.WorkingDistance, t => Length(Readings.Distance(t)));
         for (var i = 0; i < input.Goals.Count; i++)
         {
-            Add(rows, $"Goal {i + 1}: target print", input.Goals[i].TargetPrint, t => Print(Readings.PrintSize(t)));
+            var goal = input.Goals[i];
+            if (goal.IsDistanceTask)
+            {
+                Add(rows, $"Goal {i + 1}: acuity wanted", goal.TargetPrint, t => Acuity(Readings.Acuity(t), snellen));
+            }
+            else
+            {
+                Add(rows, $"Goal {i + 1}: target print", goal.TargetPrint, t => Print(Readings.PrintSize(t)));
+            }
         }
 
         return rows;

@@ -82,6 +82,8 @@ public sealed class GoalInput
 
     public string? TargetPrint { get; set; }
 
+    public bool IsDistanceTask => Enum.TryParse<GoalTask>(Task, out var task) && VisitGoal.IsDistanceTask(task);
+
     public bool IsUsed => !string.IsNullOrWhiteSpace(Task) || !string.IsNullOrWhiteSpace(TargetPrint) || !string.IsNullOrWhiteSpace(Detail);
 }
 
@@ -97,6 +99,9 @@ public sealed class ReadingSpeedInput
 public sealed class VisitInputValidator : AbstractValidator<VisitInput>
 {
     public const int MaximumWordsPerMinute = 1000;
+
+    /// <summary>The largest amplitude of accommodation the core accepts as measured.</summary>
+    public const double MaximumAmplitude = 30;
 
     public VisitInputValidator(TimeProvider clock)
     {
@@ -132,6 +137,12 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
         RuleFor(v => v.RefractionWorn).MaximumLength(FieldLimits.Name).WithMessage($"Keep the refraction to {FieldLimits.Name} characters or fewer.");
         RuleFor(v => v.AddWorn).Reads(Readings.Power);
         RuleFor(v => v.Accommodation).Reads(Readings.Power);
+        RuleFor(v => v.Accommodation)
+            .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var amplitude) || amplitude.Dioptres is >= 0 and <= MaximumAmplitude)
+            .WithMessage($"Type the measured amplitude of accommodation between 0 and {MaximumAmplitude} D, such as 8, or leave it empty to estimate it from age.");
+        RuleFor(v => v.AddWorn)
+            .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var add) || add.Dioptres >= 0)
+            .WithMessage("A reading add is a plus power; type it such as +2.50, or leave it empty.");
         RuleFor(v => v.WorkingDistance).Reads(Readings.Distance);
         RuleFor(v => v.Notes).MaximumLength(FieldLimits.Notes).WithMessage($"Keep the notes to {FieldLimits.Notes} characters or fewer.");
         RuleFor(v => v.UsefulEyes).IsInEnum().WithMessage("Choose which eyes are useful from the list.");
@@ -144,8 +155,11 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
                 .WithMessage("Choose the task from the list, such as Newspaper.");
             goal.RuleFor(g => g.TargetPrint)
                 .NotEmpty().When(g => g.IsUsed)
-                .WithMessage("Type the print size this task needs, such as 1M for newspaper text.");
-            goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize);
+                .WithMessage(g => g.IsDistanceTask
+                    ? "Type the distance acuity this task needs, such as 6/12 for television."
+                    : "Type the print size this task needs, such as 1M for newspaper text.");
+            goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize).When(g => !g.IsDistanceTask);
+            goal.RuleFor(g => g.TargetPrint).Reads(Readings.Acuity).When(g => g.IsDistanceTask);
             goal.RuleFor(g => g.Detail).MaximumLength(FieldLimits.Name).WithMessage($"Keep the task detail to {FieldLimits.Name} characters or fewer.");
         });
 
@@ -161,29 +175,4 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
                 .WithMessage($"Type the reading speed as whole words per minute, from 0 to {MaximumWordsPerMinute}, such as 85.");
         });
     }
-}
-
-internal static class ReadsExtension
-{
-    /// <summary>An optional measurement: empty is fine; anything typed must be read by <paramref name="parse"/>, whose message is shown.</summary>
-    public static IRuleBuilderOptionsConditions<T, string?> Reads<T, TValue>(this IRuleBuilder<T, string?> rule, Func<string, Optics.Text.ParseResult<TValue>> parse) =>
-        rule.Custom((text, context) =>
-        {
-            if (string.IsNullOrWhiteSpace(text))
-            {
-                return;
-            }
-
-            if (text.Length > FieldLimits.Measurement)
-            {
-                context.AddFailure($"Keep this to {FieldLimits.Measurement} characters or fewer.");
-                return;
-            }
-
-            var result = parse(text);
-            if (!result.Success)
-            {
-                context.AddFailure(result.Error);
-            }
-        });
 }

@@ -32,14 +32,17 @@ internal static class VisitMapping
         visit.Goals.Clear();
         foreach (var (goal, position) in input.Goals.Where(g => g.IsUsed).Select((g, i) => (g, i)))
         {
-            var print = Clean(goal.TargetPrint)!;
+            var target = Clean(goal.TargetPrint)!;
+            var task = Enum.Parse<GoalTask>(goal.Task!);
+            var distance = VisitGoal.IsDistanceTask(task);
             visit.Goals.Add(new VisitGoal
             {
                 Position = position,
-                Task = Enum.Parse<GoalTask>(goal.Task!),
+                Task = task,
                 Detail = Clean(goal.Detail),
-                TargetPrintText = print,
-                TargetPrint = Readings.PrintSize(print).Value,
+                TargetText = target,
+                TargetPrint = distance ? null : Readings.PrintSize(target).Value,
+                TargetAcuity = distance ? Readings.Acuity(target).Value : null,
             });
         }
 
@@ -77,7 +80,7 @@ internal static class VisitMapping
         HomeLighting = visit.HomeLighting,
         Notes = visit.Notes,
         Version = visit.Version,
-        Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalInput { Task = g.Task.ToString(), Detail = g.Detail, TargetPrint = g.TargetPrintText })],
+        Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalInput { Task = g.Task.ToString(), Detail = g.Detail, TargetPrint = g.TargetText })],
         ReadingSpeeds = [.. visit.ReadingSpeeds.OrderBy(s => s.Position).Select(s => new ReadingSpeedInput { PrintSize = s.PrintSizeText, WordsPerMinute = s.WordsPerMinute.ToString(CultureInfo.InvariantCulture) })],
     }.WithBlankRows();
 

@@ -28,7 +28,7 @@ public class VisitPagesTests
         Assert.Equal(0.40, visit.NearTestDistance!.Value.Metres, 9);
         Assert.Equal(4.0, visit.NearThreshold!.Value.M, 9);
         var goal = Assert.Single(visit.Goals);
-        Assert.Equal("1M", goal.TargetPrintText);
+        Assert.Equal("1M", goal.TargetText);
         Assert.Equal(90, Assert.Single(visit.ReadingSpeeds).WordsPerMinute);
     }
 

@@ -1,0 +1,138 @@
+using System.Text.Json;
+using System.Text.Json.Serialization;
+using LowVisionAid.Data;
+using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
+using Microsoft.EntityFrameworkCore;
+
+namespace LowVisionAid.Web.Pages.Plans;
+
+/// <summary>The one way plans are written to and read from their JSON columns.</summary>
+public static class PlanJson
+{
+    public static JsonSerializerOptions Options { get; } = new()
+    {
+        WriteIndented = false,
+        Converters = { new JsonStringEnumConverter() },
+    };
+
+    public static string Write<T>(T value) => JsonSerializer.Serialize(value, Options);
+
+    public static T Read<T>(string json) => JsonSerializer.Deserialize<T>(json, Options)
+        ?? throw new InvalidOperationException("A saved plan could not be read.");
+}
+
+public sealed record MakePlanResult(int? PlanId, string? Problem);
+
+/// <summary>Makes a plan from a visit as it is now, and saves its inputs, the method version and its outputs.</summary>
+public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
+{
+    public const string NoGoals = "Add at least one goal to the visit (a task and its print size) before making a plan.";
+    public const string NoWorkingDistance = "Type the client's preferred working distance on the visit, such as 25 cm, before making a plan for near tasks.";
+
+    public async Task<MakePlanResult?> HandleAsync(int visitId, CancellationToken ct)
+    {
+        var inputs = await InputsAsync(visitId, ct).ConfigureAwait(false);
+        if (inputs is null)
+        {
+            return null;
+        }
+
+        if (inputs.Goals.Count == 0)
+        {
+            return new(null, NoGoals);
+        }
+
+        if (inputs.WorkingDistanceMetres <= 0 && inputs.Goals.Any(g => PlanInputs.TaskFor(g.Task) != ReadingTask.DistanceViewing))
+        {
+            return new(null, NoWorkingDistance);
+        }
+
+        var snapshot = PlanBuilder.Build(inputs);
+        var plan = new Plan
+        {
+            VisitId = visitId,
+            CreatedUtc = clock.GetUtcNow().UtcDateTime,
+            MethodVersion = snapshot.MethodVersion,
+            InputsJson = PlanJson.Write(inputs),
+            OutputsJson = PlanJson.Write(snapshot),
+        };
+        db.Plans.Add(plan);
+        await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        return new(plan.Id, null);
+    }
+
+    /// <summary>The inputs a plan would be made from now; null when there is no such visit.</summary>
+    public async Task<PlanInputs?> InputsAsync(int visitId, CancellationToken ct)
+    {
+        var visit = await db.Visits.AsNoTracking().Include(v => v.Client).Include(v => v.Goals).Include(v => v.ReadingSpeeds)
+            .FirstOrDefaultAsync(v => v.Id == visitId, ct).ConfigureAwait(false);
+        if (visit is null)
+        {
+            return null;
+        }
+
+        var settings = await db.Settings.AsNoTracking().FirstOrDefaultAsync(ct).ConfigureAwait(false)
+            ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
+        var kit = await db.KitDevices.AsNoTracking().OrderBy(k => k.Code).ToListAsync(ct).ConfigureAwait(false);
+        return new PlanInputs
+        {
+            VisitId = visit.Id,
+            AgeYears = visit.Client!.YearOfBirth is { } born ? Math.Clamp(visit.VisitDate.Year - born, 0, 120) : null,
+            DistanceLogMar = (visit.DistanceBoth ?? Best(visit.DistanceRight, visit.DistanceLeft))?.LogMar,
+            NearThresholdM = visit.NearThreshold?.M,
+            NearTestDistanceMetres = visit.NearTestDistance?.Metres,
+            ReadingSpeeds = [.. visit.ReadingSpeeds.OrderBy(s => s.Position).Select(s => new SpeedPoint(s.PrintSize.M, s.WordsPerMinute))],
+            LogContrastSensitivity = visit.ContrastLogCs,
+            AddWornDioptres = visit.AddWorn?.Dioptres,
+            MeasuredAmplitudeDioptres = visit.AccommodationMeasured?.Dioptres,
+            WorkingDistanceMetres = visit.WorkingDistance?.Metres ?? 0,
+            HandsFree = visit.NeedsHandsFree,
+            Tremor = visit.HasTremor,
+            UsefulEyes = visit.UsefulEyes == UsefulEyes.Both ? 2 : 1,
+            SpotReserve = settings.SpotReserve.Ratio,
+            FluentReserve = settings.FluentReserve.Ratio,
+            SustainedReserve = settings.SustainedReserve.Ratio,
+            CharacterPitch = settings.CharacterPitch,
+            Imperial = settings.Units == UnitSystem.Imperial,
+            Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalPoint(g.Task, g.Detail, g.TargetText, g.TargetPrint?.M, g.TargetAcuity?.LogMar))],
+            Kit = [.. kit.Select(KitPoint.From)],
+        };
+    }
+
+    // With no both-eyes acuity, the better eye's acuity stands for the client's distance vision.
+    private static Optics.Quantities.Acuity? Best(Optics.Quantities.Acuity? right, Optics.Quantities.Acuity? left) =>
+        (right, left) switch
+        {
+            ({ } r, { } l) => r <= l ? r : l,
+            ({ } r, null) => r,
+            (null, { } l) => l,
+            _ => null,
+        };
+}
+
+public sealed record PlanTrialRow(int Id, DateOnly Date, string Device, string Outcome, string FollowUp, string? Result, string? Comment);
+
+public sealed record PlanView(
+    int Id, int VisitId, DateOnly VisitDate, int ClientId, string ClientCode, bool IsDemo, DateTime CreatedUtc,
+    PlanSnapshot Snapshot, IReadOnlyList<PlanTrialRow> Trials);
+
+public sealed class PlanDetailsHandler(ClinicDbContext db)
+{
+    public async Task<PlanView?> HandleAsync(int id, CancellationToken ct)
+    {
+        var plan = await db.Plans.AsNoTracking().Where(p => p.Id == id)
+            .Select(p => new { p.Id, p.VisitId, p.Visit!.VisitDate, p.Visit.ClientId, p.Visit.Client!.Code, p.Visit.Client.IsDemo, p.CreatedUtc, p.OutputsJson })
+            .FirstOrDefaultAsync(ct).ConfigureAwait(false);
+        if (plan is null)
+        {
+            return null;
+        }
+
+        var trials = await db.Trials.AsNoTracking().Where(t => t.PlanId == id).OrderBy(t => t.TrialDate).ThenBy(t => t.Id)
+            .ToListAsync(ct).ConfigureAwait(false);
+        return new PlanView(plan.Id, plan.VisitId, plan.VisitDate, plan.ClientId, plan.Code, plan.IsDemo, plan.CreatedUtc,
+            PlanJson.Read<PlanSnapshot>(plan.OutputsJson),
+            [.. trials.Select(t => new PlanTrialRow(t.Id, t.TrialDate, t.DeviceDescription, Labels.Outcome(t.Outcome), Labels.FollowUp(t.FollowUpDue, t.FollowUpDone), t.ResultText, t.ClientComment))]);
+    }
+}

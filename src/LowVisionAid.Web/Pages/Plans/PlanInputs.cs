@@ -1,0 +1,200 @@
+using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Accommodation;
+using LowVisionAid.Optics.Devices;
+using LowVisionAid.Optics.Planning;
+using LowVisionAid.Optics.Quantities;
+using LowVisionAid.Optics.Requirement;
+using CoreKitDevice = LowVisionAid.Optics.Kit.KitDevice;
+using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
+using KitLabel = LowVisionAid.Optics.Kit.KitLabel;
+
+namespace LowVisionAid.Web.Pages.Plans;
+
+/// <summary>
+/// Everything a saved plan was made from, in plain numbers (metres, dioptres, logMAR, M), so it serialises exactly
+/// and the same inputs always rebuild the same requests. Taken from the visit, the client, the settings and the kit
+/// at the moment the plan was made.
+/// </summary>
+public sealed record PlanInputs
+{
+    /// <summary>Distance tasks (television, faces) are planned at this viewing distance: an assumption shown on the plan.</summary>
+    public const double AssumedDistanceViewingMetres = 3.0;
+
+    public int VisitId { get; init; }
+
+    public int? AgeYears { get; init; }
+
+    public double? DistanceLogMar { get; init; }
+
+    public double? NearThresholdM { get; init; }
+
+    public double? NearTestDistanceMetres { get; init; }
+
+    public IReadOnlyList<SpeedPoint> ReadingSpeeds { get; init; } = [];
+
+    public double? LogContrastSensitivity { get; init; }
+
+    public double? AddWornDioptres { get; init; }
+
+    public double? MeasuredAmplitudeDioptres { get; init; }
+
+    public double WorkingDistanceMetres { get; init; }
+
+    public bool HandsFree { get; init; }
+
+    public bool Tremor { get; init; }
+
+    public int UsefulEyes { get; init; } = 2;
+
+    public double SpotReserve { get; init; }
+
+    public double FluentReserve { get; init; }
+
+    public double SustainedReserve { get; init; }
+
+    public double CharacterPitch { get; init; }
+
+    public bool Imperial { get; init; }
+
+    public IReadOnlyList<GoalPoint> Goals { get; init; } = [];
+
+    public IReadOnlyList<KitPoint> Kit { get; init; } = [];
+
+    /// <summary>The plan request for one goal; every figure comes from these inputs alone.</summary>
+    public PlanRequest RequestFor(GoalPoint goal)
+    {
+        ArgumentNullException.ThrowIfNull(goal);
+        var task = TaskFor(goal.Task);
+        var distanceTask = task == ReadingTask.DistanceViewing;
+        Distance? nearDistance = NearTestDistanceMetres is { } nd ? Distance.FromMetres(nd) : null;
+        return new PlanRequest
+        {
+            Task = task,
+            TargetPrint = PrintSize.FromM(goal.TargetM ?? 1.0),
+            PreferredDistance = Distance.FromMetres(distanceTask ? AssumedDistanceViewingMetres : WorkingDistanceMetres),
+            DistanceAcuity = DistanceLogMar is { } d ? Acuity.FromLogMar(d) : null,
+            GoalDistanceAcuity = goal.GoalLogMar is { } g ? Acuity.FromLogMar(g) : null,
+            Estimates = new EstimateInputs
+            {
+                Reserve = AcuityReserve.FromRatio(ReserveFor(goal.Task)),
+                NearThresholdPrint = NearThresholdM is { } m ? PrintSize.FromM(m) : null,
+                NearTestDistance = nearDistance,
+                ReadingPoints = [.. ReadingSpeeds.Select(s => new ReadingPoint(PrintSize.FromM(s.PrintM), s.WordsPerMinute))],
+                ReadingTestDistance = ReadingSpeeds.Count > 0 ? nearDistance : null,
+            },
+            Constraints = new ClientConstraints
+            {
+                HandsFreeWanted = HandsFree,
+                Tremor = Tremor,
+                UsefulEyes = UsefulEyes,
+                AgeYears = AgeYears,
+                UsableAccommodation = MeasuredAmplitudeDioptres is { } a
+                    ? AccommodationProfile.FromMeasuredAmplitude(Power.FromDioptres(a)).UsableSustained
+                    : null,
+                AddWorn = AddWornDioptres is { } add ? Power.FromDioptres(add) : null,
+                LogContrastSensitivity = LogContrastSensitivity,
+            },
+            Kit = [.. Kit.Select(k => k.ToCore())],
+            Settings = PlanSettings.Default with { CharacterPitch = CharacterPitch },
+        };
+    }
+
+    /// <summary>How each everyday task is planned.</summary>
+    public static ReadingTask TaskFor(GoalTask task) => task switch
+    {
+        GoalTask.MedicationLabels => ReadingTask.SpotReading,
+        GoalTask.Phone => ReadingTask.Screen,
+        GoalTask.Writing => ReadingTask.Writing,
+        GoalTask.Television or GoalTask.Faces => ReadingTask.DistanceViewing,
+        _ => ReadingTask.SustainedReading,
+    };
+
+    /// <summary>The clinic's default reserve for the task: spot for labels and phones, sustained for books, fluent otherwise.</summary>
+    public double ReserveFor(GoalTask task) => task switch
+    {
+        GoalTask.MedicationLabels or GoalTask.Phone => SpotReserve,
+        GoalTask.Book => SustainedReserve,
+        _ => FluentReserve,
+    };
+}
+
+public sealed record SpeedPoint(double PrintM, int WordsPerMinute);
+
+public sealed record GoalPoint(GoalTask Task, string? Detail, string TargetText, double? TargetM, double? GoalLogMar);
+
+/// <summary>One kit device as it was when the plan was made.</summary>
+public sealed record KitPoint
+{
+    public required string Code { get; init; }
+
+    public required string Name { get; init; }
+
+    public DeviceKind Kind { get; init; }
+
+    public double? PowerDioptres { get; init; }
+
+    public double? LabelTimes { get; init; }
+
+    public LabelConvention? LabelConvention { get; init; }
+
+    public double? ApertureMetres { get; init; }
+
+    public double? StandHeightMetres { get; init; }
+
+    public double? ImageBelowLensMetres { get; init; }
+
+    public double? EnlargementRatio { get; init; }
+
+    public double? Magnification { get; init; }
+
+    public double? ReadingCapDioptres { get; init; }
+
+    public double? FieldArcminutes { get; init; }
+
+    public double? FocusNearestMetres { get; init; }
+
+    public bool Illuminated { get; init; }
+
+    public static KitPoint From(KitDevice k)
+    {
+        ArgumentNullException.ThrowIfNull(k);
+        return new()
+        {
+            Code = k.Code,
+            Name = k.Name,
+            Kind = k.Kind,
+            PowerDioptres = k.Power?.Dioptres,
+            LabelTimes = k.LabelTimes,
+            LabelConvention = k.LabelConvention,
+            ApertureMetres = k.Aperture?.Metres,
+            StandHeightMetres = k.StandHeight?.Metres,
+            ImageBelowLensMetres = k.ImageBelowLens?.Metres,
+            EnlargementRatio = k.EnlargementRatio,
+            Magnification = k.Magnification,
+            ReadingCapDioptres = k.ReadingCap?.Dioptres,
+            FieldArcminutes = k.Field?.Arcminutes,
+            FocusNearestMetres = k.FocusNearest?.Metres,
+            Illuminated = k.Illuminated,
+        };
+    }
+
+    public CoreKitDevice ToCore() => new()
+    {
+        Id = Code,
+        Name = Name,
+        Kind = Kind,
+        Power = PowerDioptres is { } p ? Power.FromDioptres(p) : null,
+        Label = LabelTimes is { } t && LabelConvention is { } c ? new KitLabel(t, c) : null,
+        Aperture = Metres(ApertureMetres),
+        StandHeight = Metres(StandHeightMetres),
+        ImageBelowLens = Metres(ImageBelowLensMetres),
+        EnlargementRatio = EnlargementRatio,
+        Magnification = Magnification,
+        ReadingCap = ReadingCapDioptres is { } r ? Power.FromDioptres(r) : null,
+        Field = FieldArcminutes is { } f ? VisualAngle.FromArcminutes(f) : null,
+        FocusNearest = Metres(FocusNearestMetres),
+        Illuminated = Illuminated,
+    };
+
+    private static Distance? Metres(double? metres) => metres is { } m ? Distance.FromMetres(m) : null;
+}
