@@ -97,7 +97,7 @@ internal static class HandoutBenchmark
             var settings = LowVisionAid.Web.Demo.DemoClinic.DefaultSettings("Harbour Bench Clinic (invented)", hasDemoData: false);
             settings.ClinicContact = "2 Quay Street, Port Example · 000 1111 2222 (invented)";
             db.Settings.Add(settings);
-            var kit = new KitDevice { Code = "HM-08", Name = "Hand magnifier +8 D, 75 mm", Kind = KitDeviceKind.HandMagnifier, Power = Power.FromDioptres(8), Aperture = Distance.FromMillimetres(75) };
+            var kit = new KitDevice { Code = "HM-08", Name = "Hand magnifier +8 D, 75 mm", Kind = LowVisionAid.Optics.Kit.DeviceKind.HandMagnifier, Power = Power.FromDioptres(8), Aperture = Distance.FromMillimetres(75) };
             db.KitDevices.Add(kit);
             var client = new Client { Code = "B-1" };
             var visit = new Visit { VisitDate = new DateOnly(2026, 11, 20) };

@@ -1,53 +1,53 @@
-using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Options;
 
 namespace LowVisionAid.Web.Handouts;
 
 /// <summary>The plain-language handout wording for each kind of device: one short instruction per line.</summary>
 internal static class HandoutTexts
 {
-    public static string WhatItIs(KitDeviceKind family) => family switch
+    public static string WhatItIs(OptionKind family) => family switch
     {
-        KitDeviceKind.HandMagnifier => "A lens you hold in your hand between your eye and the page. It makes print look bigger.",
-        KitDeviceKind.StandMagnifier => "A lens on legs that stands on the page, so the distance to the page is already set for you.",
-        KitDeviceKind.SpectacleAdd => "Strong reading glasses. You hold the page close to your face and keep both hands free.",
-        KitDeviceKind.NearTelescope => "A small telescope for reading, fitted to glasses. It lets you read from a little further away.",
-        KitDeviceKind.DistanceTelescope => "A small telescope for seeing things far away, such as a television or a sign.",
-        KitDeviceKind.VideoMagnifier => "A camera and screen that show the page bigger, brighter and with stronger contrast.",
+        OptionKind.HandMagnifier => "A lens you hold in your hand between your eye and the page. It makes print look bigger.",
+        OptionKind.StandMagnifier => "A lens on legs that stands on the page, so the distance to the page is already set for you.",
+        OptionKind.SpectacleAdd => "Strong reading glasses. You hold the page close to your face and keep both hands free.",
+        OptionKind.NearTelescope => "A small telescope for reading, fitted to glasses. It lets you read from a little further away.",
+        OptionKind.DistanceTelescope => "A small telescope for seeing things far away, such as a television or a sign.",
+        OptionKind.VideoMagnifier => "A camera and screen that show the page bigger, brighter and with stronger contrast.",
         _ => "A way to make print easier to see, chosen with you at the clinic.",
     };
 
-    public static IReadOnlyList<string> HowToUse(KitDeviceKind family) => family switch
+    public static IReadOnlyList<string> HowToUse(OptionKind family) => family switch
     {
-        KitDeviceKind.HandMagnifier =>
+        OptionKind.HandMagnifier =>
         [
             "Wear your usual distance glasses, or none, as the clinic showed you.",
             "Put the lens flat on the page, then lift it slowly until the print is clearest.",
             "Keep the lens at that distance from the page and move it along the line.",
             "Rest your elbow on a table to keep your hand steady.",
         ],
-        KitDeviceKind.StandMagnifier =>
+        OptionKind.StandMagnifier =>
         [
             "Wear the glasses the clinic told you to wear with it.",
             "Stand the magnifier flat on the page.",
             "Keep your eye at the distance shown below and slide the magnifier along the line.",
         ],
-        KitDeviceKind.SpectacleAdd =>
+        OptionKind.SpectacleAdd =>
         [
             "Put the glasses on and hold the page at the distance shown below.",
             "Move the page nearer or further by a little until the print is clear.",
             "Keep the page there; do not move your head towards it.",
         ],
-        KitDeviceKind.NearTelescope =>
+        OptionKind.NearTelescope =>
         [
             "Put the glasses on and hold the page at the distance shown below.",
             "Look straight through the telescope and keep the page still.",
         ],
-        KitDeviceKind.DistanceTelescope =>
+        OptionKind.DistanceTelescope =>
         [
             "Sit down, then hold the telescope to your eye.",
             "Turn the focus until what you look at is clear.",
         ],
-        KitDeviceKind.VideoMagnifier =>
+        OptionKind.VideoMagnifier =>
         [
             "Switch it on and put the page under the camera or in front of it.",
             "Turn the size up until the print is comfortable to read.",
@@ -60,12 +60,12 @@ internal static class HandoutTexts
         ],
     };
 
-    public static string DistanceWhat(KitDeviceKind family) => family switch
+    public static string DistanceWhat(OptionKind family) => family switch
     {
-        KitDeviceKind.HandMagnifier => "Lens to page",
-        KitDeviceKind.StandMagnifier => "Lens to page (set by the stand)",
-        KitDeviceKind.VideoMagnifier => "Eye to screen",
-        KitDeviceKind.DistanceTelescope => "Eye to what you look at",
+        OptionKind.HandMagnifier => "Lens to page",
+        OptionKind.StandMagnifier => "Lens to page (set by the stand)",
+        OptionKind.VideoMagnifier => "Eye to screen",
+        OptionKind.DistanceTelescope => "Eye to what you look at",
         _ => "Eye to page",
     };
 

@@ -1,4 +1,4 @@
-using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Summaries;
@@ -52,7 +52,7 @@ public sealed record PlanReportData(
 /// <param name="Notes">The plan's notes on it (limits, fluency).</param>
 public sealed record ReportOption(
     string Name,
-    KitDeviceKind Family,
+    OptionKind Family,
     string KindLabel,
     string Task,
     PrintSize Target,

@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Figures;
 using LowVisionAid.Reports.Handouts;
@@ -105,7 +106,7 @@ public sealed class PlanReports(
     private static List<HandoutDistance> Distances(ReportOption o)
     {
         var distances = new List<HandoutDistance> { new(HandoutTexts.DistanceWhat(o.Family), o.WorkingDistance) };
-        if (o.EyeToLens is { } eye && o.Family is Data.Entities.KitDeviceKind.HandMagnifier or Data.Entities.KitDeviceKind.StandMagnifier)
+        if (o.EyeToLens is { } eye && o.Family is OptionKind.HandMagnifier or OptionKind.StandMagnifier)
         {
             distances.Add(new(HandoutTexts.EyeToLens, eye));
         }

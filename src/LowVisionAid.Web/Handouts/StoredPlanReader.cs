@@ -3,10 +3,12 @@ using System.Text.Json;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Notation;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Summaries;
+using LowVisionAid.Web.Pages.Plans;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Handouts;
@@ -200,7 +202,7 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             ? PrintSize.FromM(m)
             : PrintSizeNotation.Parse(Text(goal, "Target"), Invariant).TryGetValue(out var typed) ? typed : PrintSize.FromM(1.0);
         var kind = Text(option, "Kind") ?? "";
-        var family = Family(kind);
+        var family = Family(kind) ?? OptionKind.LargePrint;
         return new ReportOption(
             Text(option, "KitName") ?? trial.KitDevice?.Name ?? kind,
             family,
@@ -215,7 +217,7 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             StoredDistance(Figure("Eye to lens")),
             StoredDistance(Figure("Field on the page")),
             int.TryParse(Figure("Letters in view"), NumberStyles.Integer, Invariant, out var letters) ? letters : null,
-            family == KitDeviceKind.VideoMagnifier || trial.KitDevice?.Illuminated == true,
+            family == OptionKind.VideoMagnifier || trial.KitDevice?.Illuminated == true,
             figures,
             [.. Array(option, "Reasons").Select(r => Text(r, "Text")).OfType<string>()],
             [.. Array(option, "Notes").Where(n => n.ValueKind == JsonValueKind.String).Select(n => n.GetString()!)]);
@@ -307,16 +309,9 @@ public sealed class StoredPlanReader(ClinicDbContext db)
         return text.Length > 0 ? text : "—";
     }
 
-    private static KitDeviceKind Family(string kind) => kind switch
-    {
-        "Hand magnifier" => KitDeviceKind.HandMagnifier,
-        "Stand magnifier" => KitDeviceKind.StandMagnifier,
-        "Reading spectacles (high add)" => KitDeviceKind.SpectacleAdd,
-        "Near telescope" => KitDeviceKind.NearTelescope,
-        "Distance telescope" => KitDeviceKind.DistanceTelescope,
-        "Video magnifier" => KitDeviceKind.VideoMagnifier,
-        _ => KitDeviceKind.Other,
-    };
+    // The stored kind is the plan page's label for it (PlanBuilder.KindLabel).
+    private static OptionKind? Family(string kind) =>
+        Enum.GetValues<OptionKind>().Select(k => (OptionKind?)k).FirstOrDefault(k => PlanBuilder.KindLabel(k!.Value) == kind);
 
     // Stored figures are the plan page's text, e.g. "+8.00 D (enough)" and "12.5 cm": read back with the core parsers.
     private static double? LeadingNumber(string? text)

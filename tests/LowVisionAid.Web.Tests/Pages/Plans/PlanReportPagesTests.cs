@@ -229,7 +229,7 @@ public sealed partial class PlanReportPagesTests
             settings.ClinicContact = ClinicLine;
             settings.HandoutPrintSize = Optics.Quantities.PrintSize.FromM(1.5);   // 12.5 pt, so the body stays at the 18 pt floor
             db.Settings.Add(settings);
-            var kit = new KitDevice { Code = "HM-08", Name = "Hand magnifier +8 D, 75 mm", Kind = KitDeviceKind.HandMagnifier, Power = Optics.Quantities.Power.FromDioptres(8), Aperture = Optics.Quantities.Distance.FromMillimetres(75) };
+            var kit = new KitDevice { Code = "HM-08", Name = "Hand magnifier +8 D, 75 mm", Kind = Optics.Kit.DeviceKind.HandMagnifier, Power = Optics.Quantities.Power.FromDioptres(8), Aperture = Optics.Quantities.Distance.FromMillimetres(75) };
             db.KitDevices.Add(kit);
             var client = new Client { Code = code };
             var visit = new Visit { VisitDate = new DateOnly(2026, 11, 20), Practitioner = "A. Example (invented)" };
