@@ -212,36 +212,38 @@ public static class Planner
     {
         var inputs = request.Estimates ?? EstimateInputs.None;
         var reserve = inputs.Reserve ?? EstimateInputs.DefaultReserveFor(request.Task);
-        var estimates = new List<PowerEstimate>(4);
         ReadingCurveAnalysis? curve = null;
-        if (request.DistanceAcuity is { } acuity)
+        var acuity = request.DistanceAcuity;
+        var near = inputs.NearThresholdPrint is not null && inputs.NearTestDistance is not null;
+        var readingDistance = inputs.ReadingTestDistance;
+        if (readingDistance is { } rd && inputs.CriticalPrintSize is null && !inputs.ReadingPoints.IsDefaultOrEmpty)
         {
-            estimates.Add(KestenbaumRule.Classic(acuity));
-            estimates.Add(KestenbaumRule.WithReserve(acuity, request.TargetPrint, reserve));
+            curve = ReadingCurve.Analyse(rd, inputs.ReadingPoints);
         }
 
-        if (inputs.NearThresholdPrint is { } threshold && inputs.NearTestDistance is { } nearDistance)
+        var fromCurve = readingDistance is not null && (inputs.CriticalPrintSize is not null || curve is { IsUsable: true });
+        // Implementation note: the estimates go into an array of their exact size that the comparison keeps as it is.
+        var estimates = new PowerEstimate[(acuity is null ? 0 : 2) + (near ? 1 : 0) + (fromCurve ? 1 : 0)];
+        var n = 0;
+        if (acuity is { } a)
         {
-            estimates.Add(NearAcuityMethod.Estimate(threshold, nearDistance, request.TargetPrint, reserve));
+            estimates[n++] = KestenbaumRule.Classic(a);
+            estimates[n++] = KestenbaumRule.WithReserve(a, request.TargetPrint, reserve);
         }
 
-        if (inputs.ReadingTestDistance is { } readingDistance)
+        if (near)
         {
-            if (inputs.CriticalPrintSize is { } cps)
-            {
-                estimates.Add(CriticalPrintSizeMethod.Estimate(cps, readingDistance, request.TargetPrint));
-            }
-            else if (!inputs.ReadingPoints.IsDefaultOrEmpty)
-            {
-                curve = ReadingCurve.Analyse(readingDistance, inputs.ReadingPoints);
-                if (curve.IsUsable)
-                {
-                    estimates.Add(CriticalPrintSizeMethod.Estimate(curve, request.TargetPrint));
-                }
-            }
+            estimates[n++] = NearAcuityMethod.Estimate(inputs.NearThresholdPrint!.Value, inputs.NearTestDistance!.Value, request.TargetPrint, reserve);
         }
 
-        return (EstimateReconciliation.Compare(estimates), curve);
+        if (fromCurve)
+        {
+            estimates[n] = inputs.CriticalPrintSize is { } cps
+                ? CriticalPrintSizeMethod.Estimate(cps, readingDistance!.Value, request.TargetPrint)
+                : CriticalPrintSizeMethod.Estimate(curve!, request.TargetPrint);
+        }
+
+        return (EstimateReconciliation.CompareOwned(estimates), curve);
     }
 
     /// <summary>

@@ -1,4 +1,5 @@
-using System.Globalization;
+using System.Collections.Immutable;
+using System.Runtime.InteropServices;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Requirement;
@@ -22,14 +23,14 @@ public static class CriticalPrintSizeMethod
         Inputs.Print(criticalPrintSize, nameof(criticalPrintSize), "critical print size");
         Inputs.TestDistance(testDistance, nameof(testDistance));
         Inputs.Print(target, nameof(target), "target print size");
+        return Estimate(criticalPrintSize, testDistance, target, new AssumptionFacts(criticalPrintSize, testDistance));
+    }
+
+    private static PowerEstimate Estimate(PrintSize criticalPrintSize, Distance testDistance, PrintSize target, AssumptionFacts facts)
+    {
         // Reading-curve method: Feq = M_CPS / (d × M_t), no second reserve (MNREAD CPS definition; methods §2.5).
         var dioptres = criticalPrintSize.M / (testDistance.Metres * target.M);
-        return PowerEstimate.Create(PowerMethod.CriticalPrintSize, dioptres, testDistance, target, reserve: null,
-        [
-            $"Reading curve: critical print size {criticalPrintSize.ToString(null, CultureInfo.InvariantCulture)} at {Inputs.Number(testDistance.Centimetres, "0.#")} cm, the smallest print read at the reader's best speed.",
-            $"Target print {target.ToString(null, CultureInfo.InvariantCulture)} is made to look as large as the critical print size; no extra acuity reserve is added, because the critical print size already includes it.",
-            "It assumes the reader was focused at the test distance throughout the reading test.",
-        ]);
+        return PowerEstimate.Create(PowerMethod.CriticalPrintSize, dioptres, testDistance, target, reserve: null, facts);
     }
 
     /// <summary>The estimate from an analysed reading curve (see <see cref="ReadingCurve.Analyse"/>).</summary>
@@ -45,14 +46,40 @@ public static class CriticalPrintSizeMethod
             throw new ArgumentException("The reading curve could not be used: " + curve.Refusal, nameof(curve));
         }
 
-        var estimate = Estimate(curve.CriticalPrintSize, curve.TestDistance, target);
-        var notes = estimate.Assumptions.Insert(1, string.Create(CultureInfo.InvariantCulture,
-            $"Maximum reading speed {curve.MaximumReadingSpeed:0} words per minute; critical print size = the smallest print read at 90 % or more of the mean speed at larger sizes."));
-        if (!curve.SpeedFellBelowCriticalPrintSize)
+        Inputs.Print(curve.CriticalPrintSize, nameof(curve), "critical print size");
+        Inputs.TestDistance(curve.TestDistance, nameof(curve));
+        Inputs.Print(target, nameof(target), "target print size");
+        return Estimate(curve.CriticalPrintSize, curve.TestDistance, target,
+            new AssumptionFacts(curve.CriticalPrintSize, curve.TestDistance, curve.MaximumReadingSpeed, curve.SpeedFellBelowCriticalPrintSize));
+    }
+
+    /// <summary>
+    /// The method's assumptions, with the measurements formatted for <paramref name="provider"/>; from a reading
+    /// curve, also its maximum reading speed and, when reading had not slowed, that the CPS may be smaller.
+    /// </summary>
+    internal static ImmutableArray<string> Assumptions(PowerEstimate estimate, IFormatProvider provider)
+    {
+        var facts = estimate.Facts;
+        var fromCurve = facts.MaximumReadingSpeed is not null;
+        var notSlowed = fromCurve && !facts.SpeedFellBelowCriticalPrintSize;
+        var notes = new string[3 + (fromCurve ? 1 : 0) + (notSlowed ? 1 : 0)];
+        var n = 0;
+        notes[n++] = string.Create(provider,
+            $"Reading curve: critical print size {facts.MeasuredPrint} at {facts.TestDistance.Centimetres:0.#} cm, the smallest print read at the reader's best speed.");
+        if (facts.MaximumReadingSpeed is { } mrs)
         {
-            notes = notes.Insert(2, "Reading had not slowed at the smallest print tested, so the true critical print size may be smaller and this estimate too high; test smaller print to find it.");
+            notes[n++] = string.Create(provider,
+                $"Maximum reading speed {mrs:0} words per minute; critical print size = the smallest print read at 90 % or more of the mean speed at larger sizes.");
         }
 
-        return estimate.WithAssumptions(notes);
+        if (notSlowed)
+        {
+            notes[n++] = "Reading had not slowed at the smallest print tested, so the true critical print size may be smaller and this estimate too high; test smaller print to find it.";
+        }
+
+        notes[n++] = string.Create(provider,
+            $"Target print {estimate.TargetPrint} is made to look as large as the critical print size; no extra acuity reserve is added, because the critical print size already includes it.");
+        notes[n] = "It assumes the reader was focused at the test distance throughout the reading test.";
+        return ImmutableCollectionsMarshal.AsImmutableArray(notes);
     }
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Requirement;
@@ -32,6 +31,4 @@ internal static class Inputs
             ? size
             : throw new ArgumentOutOfRangeException(paramName, size.M,
                 $"Enter the {what} as a print size greater than zero, such as 1.0M.");
-
-    public static string Number(double value, string format) => value.ToString(format, CultureInfo.InvariantCulture);
 }

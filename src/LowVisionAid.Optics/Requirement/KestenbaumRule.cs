@@ -1,4 +1,4 @@
-using System.Globalization;
+using System.Collections.Immutable;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Requirement;
@@ -22,12 +22,7 @@ public static class KestenbaumRule
     {
         // Kestenbaum: add = 1 / V_dec (Kestenbaum and Sturman 1956).
         var dioptres = 1.0 / distanceAcuity.DecimalValue;
-        return PowerEstimate.Create(PowerMethod.KestenbaumClassic, dioptres, DefaultReference, PrintSize.FromM(1), AcuityReserve.Spot,
-        [
-            "Kestenbaum's rule: the add is the reciprocal of the decimal distance acuity (Kestenbaum and Sturman 1956).",
-            "It brings 1M print (about newsprint) just to the reader's threshold, with no acuity reserve: expect slow, effortful reading at best.",
-            "It assumes near vision is as good as distance acuity predicts; distance acuity often under-estimates the near need (for example with a central scotoma, cataract or small pupils).",
-        ]);
+        return PowerEstimate.Create(PowerMethod.KestenbaumClassic, dioptres, DefaultReference, PrintSize.FromM(1), AcuityReserve.Spot);
     }
 
     /// <summary>
@@ -43,11 +38,25 @@ public static class KestenbaumRule
         Inputs.Print(target, nameof(target), "target print size");
         // Kestenbaum general form: Feq = R / (V_dec × M_t) (derived from the rule's 1M-at-threshold basis; methods §2.1).
         var dioptres = reserve.Ratio / (distanceAcuity.DecimalValue * target.M);
-        return PowerEstimate.Create(PowerMethod.KestenbaumWithReserve, dioptres, DefaultReference, target, reserve,
-        [
-            "Kestenbaum's rule extended to the target print size and an acuity reserve: Feq = reserve ÷ (decimal distance acuity × target M size).",
-            $"Target print {target.ToString(null, CultureInfo.InvariantCulture)} with an acuity reserve of {reserve.ToString(null, CultureInfo.InvariantCulture)}.",
-            "It assumes near vision is as good as distance acuity predicts; distance acuity often under-estimates the near need (for example with a central scotoma, cataract or small pupils).",
-        ]);
+        return PowerEstimate.Create(PowerMethod.KestenbaumWithReserve, dioptres, DefaultReference, target, reserve);
     }
+
+    private const string NearAsDistancePredicts =
+        "It assumes near vision is as good as distance acuity predicts; distance acuity often under-estimates the near need (for example with a central scotoma, cataract or small pupils).";
+
+    /// <summary>The classic rule's assumptions: no numbers in them, so one copy serves every culture.</summary>
+    internal static readonly ImmutableArray<string> ClassicAssumptions =
+    [
+        "Kestenbaum's rule: the add is the reciprocal of the decimal distance acuity (Kestenbaum and Sturman 1956).",
+        "It brings 1M print (about newsprint) just to the reader's threshold, with no acuity reserve: expect slow, effortful reading at best.",
+        NearAsDistancePredicts,
+    ];
+
+    /// <summary>The general form's assumptions, with the target and reserve formatted for <paramref name="provider"/>.</summary>
+    internal static ImmutableArray<string> AssumptionsWithReserve(PowerEstimate estimate, IFormatProvider provider) =>
+    [
+        "Kestenbaum's rule extended to the target print size and an acuity reserve: Feq = reserve ÷ (decimal distance acuity × target M size).",
+        string.Create(provider, $"Target print {estimate.TargetPrint} with an acuity reserve of {estimate.Reserve}."),
+        NearAsDistancePredicts,
+    ];
 }

@@ -1,4 +1,4 @@
-using System.Globalization;
+using System.Collections.Immutable;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Requirement;
@@ -27,10 +27,14 @@ public static class NearAcuityMethod
         // Near-acuity method: Feq = (M_th × R) / (d × M_t), EVD = d × M_t / (M_th × R) (Bailey; Lovie-Kitchin; methods §2.2).
         var dioptres = thresholdPrint.M * reserve.Ratio / (testDistance.Metres * target.M);
         return PowerEstimate.Create(PowerMethod.NearAcuity, dioptres, testDistance, target, reserve,
-        [
-            $"Near acuity: smallest print read {thresholdPrint.ToString(null, CultureInfo.InvariantCulture)} at {Inputs.Number(testDistance.Centimetres, "0.#")} cm.",
-            $"Target print {target.ToString(null, CultureInfo.InvariantCulture)} with an acuity reserve of {reserve.ToString(null, CultureInfo.InvariantCulture)}: the target is made that many times larger than threshold.",
-            "It assumes the reader was focused at the test distance (wearing the add for it); if not, near acuity was measured too poor and this estimate is too high.",
-        ]);
+            new AssumptionFacts(thresholdPrint, testDistance));
     }
+
+    /// <summary>The method's assumptions, with the measurements formatted for <paramref name="provider"/>.</summary>
+    internal static ImmutableArray<string> Assumptions(PowerEstimate estimate, IFormatProvider provider) =>
+    [
+        string.Create(provider, $"Near acuity: smallest print read {estimate.Facts.MeasuredPrint} at {estimate.Facts.TestDistance.Centimetres:0.#} cm."),
+        string.Create(provider, $"Target print {estimate.TargetPrint} with an acuity reserve of {estimate.Reserve}: the target is made that many times larger than threshold."),
+        "It assumes the reader was focused at the test distance (wearing the add for it); if not, near acuity was measured too poor and this estimate is too high.",
+    ];
 }

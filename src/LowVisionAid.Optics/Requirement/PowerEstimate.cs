@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Requirement;
@@ -10,6 +11,10 @@ namespace LowVisionAid.Optics.Requirement;
 /// <see cref="NearAcuityMethod"/>, <see cref="CriticalPrintSizeMethod"/>).
 /// An estimate is a starting point for the practitioner, to be confirmed by a trial with the reader's own material.
 /// </summary>
+/// <remarks>
+/// Implementation note: an estimate keeps the numbers its texts are made from and formats the texts only when they
+/// are asked for, in the caller's culture, so that building a plan does not pay for text nobody reads.
+/// </remarks>
 public sealed record PowerEstimate
 {
     private PowerEstimate(
@@ -18,14 +23,14 @@ public sealed record PowerEstimate
         Distance referenceDistance,
         PrintSize targetPrint,
         AcuityReserve? reserve,
-        ImmutableArray<string> assumptions)
+        AssumptionFacts facts)
     {
         Method = method;
         EquivalentPower = equivalentPower;
         ReferenceDistance = referenceDistance;
         TargetPrint = targetPrint;
         Reserve = reserve;
-        Assumptions = assumptions;
+        Facts = facts;
     }
 
     /// <summary>The method that made this estimate.</summary>
@@ -43,9 +48,11 @@ public sealed record PowerEstimate
     /// <summary>Magnification relative to <see cref="ReferenceDistance"/>: M = Feq × d_ref (Bailey 2004 notes).</summary>
     public double Magnification => EquivalentPower.MagnificationRelativeTo(ReferenceDistance);
 
-    /// <summary>A plain-words note of the reference, e.g. "Magnification is stated relative to 25 cm (M = Feq × 25 cm)."</summary>
-    public string ReferenceNote =>
-        $"Magnification is stated relative to {Inputs.Number(ReferenceDistance.Centimetres, "0.#")} cm (M = Feq × {Inputs.Number(ReferenceDistance.Centimetres, "0.#")} cm).";
+    /// <summary>
+    /// A plain-words note of the reference in the current culture, e.g. "Magnification is stated relative to 25 cm
+    /// (M = Feq × 25 cm)." Use <see cref="FormatReferenceNote"/> to choose the culture.
+    /// </summary>
+    public string ReferenceNote => FormatReferenceNote(CultureInfo.CurrentCulture);
 
     /// <summary>The print size the reader wants to read.</summary>
     public PrintSize TargetPrint { get; }
@@ -62,8 +69,37 @@ public sealed record PowerEstimate
     /// </summary>
     public double LogUnits => Math.Log10(EquivalentPower.Dioptres);
 
-    /// <summary>The assumptions the method made, in plain words, for showing beside the result.</summary>
-    public ImmutableArray<string> Assumptions { get; }
+    /// <summary>
+    /// The assumptions the method made, in plain words, for showing beside the result; numbers are in the current
+    /// culture. Formatted on each call: use <see cref="FormatAssumptions"/> to choose the culture.
+    /// </summary>
+    public ImmutableArray<string> Assumptions => FormatAssumptions(CultureInfo.CurrentCulture);
+
+    /// <summary>The numbers the assumption texts are made from (the measurements, not the result).</summary>
+    internal AssumptionFacts Facts { get; }
+
+    /// <summary>The assumptions the method made, in plain words, with numbers formatted for <paramref name="provider"/>.</summary>
+    /// <param name="provider">The culture for numbers; null for the current culture.</param>
+    public ImmutableArray<string> FormatAssumptions(IFormatProvider? provider)
+    {
+        provider ??= CultureInfo.CurrentCulture;
+        return Method switch
+        {
+            PowerMethod.KestenbaumClassic => KestenbaumRule.ClassicAssumptions,
+            PowerMethod.KestenbaumWithReserve => KestenbaumRule.AssumptionsWithReserve(this, provider),
+            PowerMethod.NearAcuity => NearAcuityMethod.Assumptions(this, provider),
+            _ => CriticalPrintSizeMethod.Assumptions(this, provider),
+        };
+    }
+
+    /// <summary>The note of the reference distance, with numbers formatted for <paramref name="provider"/>.</summary>
+    /// <param name="provider">The culture for numbers; null for the current culture.</param>
+    public string FormatReferenceNote(IFormatProvider? provider)
+    {
+        var cm = ReferenceDistance.Centimetres;
+        return string.Create(provider ?? CultureInfo.CurrentCulture,
+            $"Magnification is stated relative to {cm:0.#} cm (M = Feq × {cm:0.#} cm).");
+    }
 
     /// <summary>Magnification relative to another reference distance: M = Feq × d_ref (Bailey 2004 notes).</summary>
     /// <exception cref="ArgumentOutOfRangeException">The reference distance is not greater than zero.</exception>
@@ -73,7 +109,7 @@ public sealed record PowerEstimate
     /// <summary>The same estimate with its magnification stated relative to another reference distance.</summary>
     /// <exception cref="ArgumentOutOfRangeException">The reference distance is not greater than zero.</exception>
     public PowerEstimate WithReference(Distance reference) =>
-        new(Method, EquivalentPower, Inputs.ReferenceDistance(reference, nameof(reference)), TargetPrint, Reserve, Assumptions);
+        new(Method, EquivalentPower, Inputs.ReferenceDistance(reference, nameof(reference)), TargetPrint, Reserve, Facts);
 
     internal static PowerEstimate Create(
         PowerMethod method,
@@ -81,12 +117,19 @@ public sealed record PowerEstimate
         Distance referenceDistance,
         PrintSize targetPrint,
         AcuityReserve? reserve,
-        IEnumerable<string> assumptions)
+        AssumptionFacts facts = default)
     {
-        return new(method, Power.FromDioptres(equivalentPowerDioptres), referenceDistance, targetPrint, reserve,
-            assumptions.ToImmutableArray());
+        return new(method, Power.FromDioptres(equivalentPowerDioptres), referenceDistance, targetPrint, reserve, facts);
     }
-
-    internal PowerEstimate WithAssumptions(ImmutableArray<string> assumptions) =>
-        new(Method, EquivalentPower, ReferenceDistance, TargetPrint, Reserve, assumptions);
 }
+
+/// <summary>
+/// The measurements behind an estimate's assumption texts: the print measured (the near threshold or the critical
+/// print size) and its test distance, and for a reading curve its maximum reading speed and whether reading had
+/// slowed at the smallest print tested.
+/// </summary>
+internal readonly record struct AssumptionFacts(
+    PrintSize MeasuredPrint,
+    Distance TestDistance,
+    double? MaximumReadingSpeed = null,
+    bool SpeedFellBelowCriticalPrintSize = true);
