@@ -16,6 +16,7 @@ builder.AddClinicSecurity();                // loopback unless Access:AllowLan, 
 
 builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
 builder.Services.AddCalculationApi();       // JSON API for plans and conversions, OpenAPI at /openapi/v1.json
+builder.AddPlanHandouts();                  // handout and summary PDFs, trade-off figures and the print view of a plan
 
 var app = builder.Build();
 await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
