@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Mvc;
+using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
 namespace LowVisionAid.Web.Pages;
@@ -16,6 +17,9 @@ public sealed class StatusModel : PageModel
         405 => "That action is not available here",
         _ => "The page could not be shown",
     };
+
+    /// <summary>What went wrong and what to do, for a form the app could not accept (400).</summary>
+    public string? Explanation => Code == 400 ? SecuritySetup.BadRequestMessage : null;
 
     public void OnGet(int code)
     {
