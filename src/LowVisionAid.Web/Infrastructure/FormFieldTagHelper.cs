@@ -1,3 +1,4 @@
+using System.Globalization;
 using Microsoft.AspNetCore.Mvc.ModelBinding;
 using Microsoft.AspNetCore.Mvc.Rendering;
 using Microsoft.AspNetCore.Mvc.ViewFeatures;
@@ -152,8 +153,24 @@ public sealed class FormFieldTagHelper(IHtmlGenerator generator) : TagHelper
         }
 
         attributes["spellcheck"] = "false";
-        return generator.GenerateTextBox(ViewContext, For.ModelExplorer, For.Name, value: null, format: null, attributes);
+
+        // The model's value must be passed: GenerateTextBox does not read it from the model explorer, so without it
+        // every text box rendered value="" on a GET (posted-back values come from model state and still win).
+        return generator.GenerateTextBox(ViewContext, For.ModelExplorer, For.Name, ValueText(For.Model), format: null, attributes);
     }
+
+    /// <summary>
+    /// The value as the control expects it: a date input takes only year-month-day (anything else shows as empty),
+    /// so dates are written invariantly; other values are shown as they are held.
+    /// </summary>
+    internal static string? ValueText(object? model) => model switch
+    {
+        null => null,
+        DateOnly date => date.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture),
+        DateTime dateTime => dateTime.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture),
+        IFormattable formattable => formattable.ToString(null, CultureInfo.InvariantCulture),
+        _ => model.ToString(),
+    };
 }
 
 /// <summary>
