@@ -19,8 +19,11 @@ builder.Services.AddCalculationApi();       // JSON API for plans and conversion
 builder.AddPlanHandouts();                  // handout and summary PDFs, trade-off figures and the print view of a plan
 
 var app = builder.Build();
-await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
-await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
+await using (await StartUpLock.TakeAsync(app).ConfigureAwait(false))   // one start at a time; frees a migration lock a killed start left
+{
+    await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
+    await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
+}
 
 if (!app.Environment.IsDevelopment())
 {
