@@ -118,6 +118,39 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         Assert.Equal("solid", outline);
     }
 
+    [Fact]
+    public async Task The_overflow_check_catches_an_unlabelled_scroller_and_a_box_past_the_edge_but_not_a_declared_region()
+    {
+        // Arrange: a page that fits, then three wide boxes added to it.
+        var page = await NewPageAsync(320, 256);
+        await page.GotoAsync("");
+        // Styles are set through the CSSOM: the CSP refuses inline style attributes.
+        await page.EvaluateAsync("""
+            () => {
+                const main = document.getElementById('main');
+                main.insertAdjacentHTML('beforeend',
+                    '<div id="plain-scroller"><div>wide</div></div><p id="too-wide">wide</p>' +
+                    '<div id="region" role="region" aria-label="Wide table" tabindex="0"><div>wide</div></div>');
+                for (const id of ['plain-scroller', 'region']) {
+                    const box = document.getElementById(id);
+                    box.style.overflowX = 'auto';
+                    box.firstElementChild.style.width = '600px';
+                }
+                document.getElementById('too-wide').style.width = '600px';
+                document.getElementById('too-wide').style.maxWidth = 'none';
+            }
+            """);
+        Assert.True(await page.EvaluateAsync<bool>("() => { const r = document.getElementById('region'); return r.scrollWidth > r.clientWidth; }"), "The region does not overflow, so this test checks nothing about it.");
+
+        // Act
+        var problems = await page.EvaluateAsync<string[]>(OverflowScript);
+
+        // Assert
+        Assert.Contains(problems, p => p.StartsWith("div#plain-scroller scrolls sideways", StringComparison.Ordinal));
+        Assert.Contains(problems, p => p.StartsWith("p#too-wide runs from", StringComparison.Ordinal));
+        Assert.DoesNotContain(problems, p => p.Contains("#region", StringComparison.Ordinal));
+    }
+
     /// <summary>
     /// No element reaches past either side of the window, unless it sits inside a region that scrolls on its own
     /// and that a keyboard can reach and a screen reader can name (role="region", tabindex="0", a label), or inside
