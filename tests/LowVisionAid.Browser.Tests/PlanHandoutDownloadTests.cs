@@ -83,6 +83,22 @@ public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, App
         Assert.Contains("Lens to page: 5 cm (2 inches)", text, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public async Task The_print_view_loads_the_handout_face_served_from_the_reports_assembly()
+    {
+        await Page.GotoAsync("Plans/1/Print?for=client");
+        await Assertions.Expect(new SiteChrome(Page).Heading).ToHaveTextAsync("Your magnifier plan");
+
+        // The regular and bold faces the stylesheet declares, fetched from /fonts and decoded by the browser.
+        var loaded = await Page.EvaluateAsync<string[]>(
+            "async () => { await document.fonts.load(\"18pt 'Atkinson Hyperlegible'\"); await document.fonts.load(\"bold 18pt 'Atkinson Hyperlegible'\"); await document.fonts.ready; " +
+            "return [...document.fonts].filter(f => f.family.includes('Atkinson Hyperlegible')).map(f => f.weight + ':' + f.status); }");
+
+        Assert.Contains("400:loaded", loaded);
+        Assert.Contains("700:loaded", loaded);
+        Assert.True(await Page.EvaluateAsync<bool>("() => document.fonts.check(\"18pt 'Atkinson Hyperlegible'\")"));
+    }
+
     private static async Task<string> ReadAsync(IDownload download, string name)
     {
         var path = Path.Combine(Path.GetTempPath(), $"lva-download-{name}-{Guid.NewGuid():N}.pdf");

@@ -171,6 +171,10 @@ public sealed partial class PlanReportPagesTests
         Assert.Equal(ClientHandoutRenderer.PointsFor(Optics.Quantities.PrintSize.FromM(1.0)), double.Parse(size.Groups[1].Value, CultureInfo.InvariantCulture), 3);
         Assert.Equal(8.31, double.Parse(size.Groups[1].Value, CultureInfo.InvariantCulture), 2);
         Assert.DoesNotContain("style=", html, StringComparison.Ordinal);
+        // Every word of the line is drawn at that size, in order (one SVG per word, so the line wraps on a phone).
+        var words = CheckWords().Matches(html).Select(m => m.Groups[2].Value).ToList();
+        Assert.Equal(HandoutWording.TargetSizeLine.Split(' '), words);
+        Assert.All(CheckWords().Matches(html), m => Assert.Equal(size.Groups[1].Value, m.Groups[1].Value));
     }
 
     [Fact]
@@ -340,12 +344,15 @@ public sealed partial class PlanReportPagesTests
     [GeneratedRegex(@"\s+")]
     private static partial Regex Spaces();
 
+    [GeneratedRegex("<svg class=\"check-word\"[^>]*><text [^>]*font-size=\"([0-9.]+)\"[^>]*>([^<]*)</text>")]
+    private static partial Regex CheckWords();
+
     [GeneratedRegex("<article class=\"option\".*?</article>", RegexOptions.Singleline)]
     private static partial Regex Cards();
 
     [GeneratedRegex("<form [^>]*action=\"([^\"]*)\"")]
     private static partial Regex FormAction();
 
-    [GeneratedRegex("<text [^>]*font-size=\"([0-9.]+)\"[^>]*>" + "Can you read")]
+    [GeneratedRegex("<text [^>]*font-size=\"([0-9.]+)\"[^>]*>" + "Can<")]
     private static partial Regex FontSize();
 }
