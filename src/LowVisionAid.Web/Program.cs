@@ -48,6 +48,7 @@ app.UseRouting();
 app.UseClinicSignIn();             // authentication and authorization
 app.MapRazorPages();
 app.MapCalculationApi();
+app.MapHandoutFonts();             // the handout face for the print view, from the Reports assembly (one copy in the repo)
 
 await app.RunAsync().ConfigureAwait(false);
 return 0;

@@ -253,6 +253,15 @@ namespace LowVisionAid.Migrations.Migrations
                         .ValueGeneratedOnAdd()
                         .HasColumnType("INTEGER");
 
+                    b.Property<string>("Choices")
+                        .IsRequired()
+                        .HasMaxLength(240)
+                        .HasColumnType("TEXT")
+                        .HasColumnName("ChosenOptions");
+
+                    b.Property<DateTime?>("ChosenUtc")
+                        .HasColumnType("TEXT");
+
                     b.Property<DateTime>("CreatedUtc")
                         .HasColumnType("TEXT");
 

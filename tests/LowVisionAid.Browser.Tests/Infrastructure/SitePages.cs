@@ -9,6 +9,7 @@ public static class SitePages
         ("", "LowVisionAid"),
         ("Display", "Display settings"),
         ("Calculator", "Quick calculator"),
+        ("Calculator/Explorer", "Magnifier explorer"),
         // The clinic pages, on the demo clinic loaded into each test class's own empty database.
         ("Clients", "Clients"),
         ("Clients/New", "Add a client"),
@@ -17,6 +18,11 @@ public static class SitePages
         ("Visits/1", "Visit of"),
         ("Visits/1/Edit", "Edit visit for DEMO-01"),
         ("Plans/1", "Plan for DEMO-01"),
+        // The print views (no site navigation: made for printing) and the explanation for a plan without a choice
+        // (demo plan 3). /Plans/1/Print with no "for" is the client view.
+        ("Plans/1/Print?for=client", "Your magnifier plan"),
+        ("Plans/1/Print?for=clinician", "Clinician summary"),
+        ("Plans/3/Handout", "Client handout"),
         ("Trials/New?planId=1", "Record a trial for DEMO-01"),
         ("FollowUps", "Follow-ups due"),
         ("Kit", "Trial kit"),
@@ -24,6 +30,12 @@ public static class SitePages
         ("Settings", "Settings"),
         ("no-such-page", "Page not found"),
     ];
+
+    /// <summary>Pages made for printing, without the site's header and navigation (their own links sit in the main content).</summary>
+    public static readonly IReadOnlySet<string> WithoutSiteNavigation = new HashSet<string>(StringComparer.Ordinal)
+    {
+        "Plans/1/Print?for=client", "Plans/1/Print?for=clinician",
+    };
 
     public static TheoryData<string, string> Paths()
     {
