@@ -18,6 +18,7 @@ public static class CalculationApi
     public static IServiceCollection AddCalculationApi(this IServiceCollection services)
     {
         services.AddSingleton<QuickPlanHandler>();
+        services.Configure<ProblemDetailsOptions>(options => options.CustomizeProblemDetails = ApiProblems.Explain);
         services.AddOpenApi(options => options.AddDocumentTransformer((document, _, _) =>
         {
             document.Info.Title = Title;

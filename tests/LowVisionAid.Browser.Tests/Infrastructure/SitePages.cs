@@ -28,6 +28,13 @@ public static class SitePages
         ("Kit", "Trial kit"),
         ("Kit/New", "Add a device to the kit"),
         ("Settings", "Settings"),
+        // Export, erasure, administration and sign-in: reachable over loopback with sign-in off (the tests' app).
+        ("Clients/1/Export", "Export the whole record of client DEMO-01"),
+        ("Clients/1/Erase", "Erase client DEMO-01 completely"),
+        ("Admin/Users", "Users"),
+        ("Admin/Audit", "Audit trail"),
+        ("Admin/Backup", "Backup and restore"),
+        ("Account/SignIn", "Sign in"),
         ("no-such-page", "Page not found"),
     ];
 
