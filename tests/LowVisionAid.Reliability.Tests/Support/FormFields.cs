@@ -8,7 +8,10 @@ public static partial class FormFields
 {
     public static List<KeyValuePair<string, string>> Read(string html, Func<string, bool>? formFilter = null)
     {
-        var form = FormPattern().Matches(html).FirstOrDefault(m => formFilter?.Invoke(m.Groups[1].Value) ?? true)
+        // The layout's sign-out form (on every page when signed in) is never the form under test.
+        var form = FormPattern().Matches(html)
+            .Where(m => !m.Groups[1].Value.Contains("action=\"/Account/SignOut\"", StringComparison.Ordinal))
+            .FirstOrDefault(m => formFilter?.Invoke(m.Groups[1].Value) ?? true)
             ?? throw new InvalidOperationException("No matching form on the page.");
         var body = form.Groups[2].Value;
         var fields = new List<KeyValuePair<string, string>>();
