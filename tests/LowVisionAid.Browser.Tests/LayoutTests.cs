@@ -89,21 +89,20 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
     }
 
     [Fact]
-    public async Task A_wide_table_scrolls_inside_its_own_labelled_region_reached_and_scrolled_by_the_keyboard()
+    public async Task A_figure_too_wide_for_320_css_pixels_scrolls_inside_its_own_region_reached_and_scrolled_by_the_keyboard()
     {
-        // Arrange: the kit's seven columns do not fit 320 CSS px with large text.
+        // Arrange: the plan's trade-off pictures keep their drawn size on a narrow screen, so their labels stay readable.
         var page = await NewPageAsync(320, 256, largeText: true);
-        await page.GotoAsync("Kit");
-        var region = page.GetByRole(AriaRole.Region, new() { Name = "Devices in the clinic's trial kit" });
+        await page.GotoAsync("Plans/1");
+        var region = page.Locator(".trade-off-picture").First;
+        await Assertions.Expect(region).ToHaveAttributeAsync("role", "region");
         await Assertions.Expect(region).ToHaveAttributeAsync("tabindex", "0");
-        Assert.True(await region.EvaluateAsync<bool>("r => r.scrollWidth > r.clientWidth"), "The kit table fits 320 px, so this test no longer checks a scrolling region.");
+        await Assertions.Expect(region).ToHaveAttributeAsync("aria-label", new System.Text.RegularExpressions.Regex(@"\(picture\)$"));
+        Assert.True(await region.EvaluateAsync<bool>("r => r.scrollWidth > r.clientWidth"), "The picture fits 320 px, so this test no longer checks a scrolling region.");
 
-        // Act: Tab until the region has focus, then scroll it with the arrow key.
-        for (var i = 0; i < 40 && !await region.EvaluateAsync<bool>("r => r === document.activeElement"); i++)
-        {
-            await page.Keyboard.PressAsync("Tab");
-        }
-
+        // Act: from the last link before the figures, one Tab reaches the picture; the arrow key scrolls it.
+        await page.GetByRole(AriaRole.Link, new() { Name = "print view of the summary" }).FocusAsync();
+        await page.Keyboard.PressAsync("Tab");
         await Assertions.Expect(region).ToBeFocusedAsync();
         var outline = await region.EvaluateAsync<string>("r => getComputedStyle(r).outlineStyle");
         for (var i = 0; i < 10; i++)
@@ -112,8 +111,8 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         }
 
         // Assert: the region moved, the page did not, and its focus is drawn.
-        await Artifacts.ScreenshotAsync(page, "reflow-320-kit-region-scrolled", fullPage: false);
-        Assert.True(await region.EvaluateAsync<double>("r => r.scrollLeft") > 0, "ArrowRight did not scroll the focused table region.");
+        await Artifacts.ScreenshotAsync(page, "reflow-320-plan-figure-scrolled", fullPage: false);
+        Assert.True(await region.EvaluateAsync<double>("r => r.scrollLeft") > 0, "ArrowRight did not scroll the focused picture.");
         Assert.Equal(0, await page.EvaluateAsync<double>("() => window.scrollX"));
         Assert.Equal("solid", outline);
     }

@@ -23,9 +23,9 @@ public partial class PlanPagesTests
         // The visit: distance acuity 0.1 decimal (6/60), 4M read at 40 cm, goal newspaper 1M, fluent reserve 2:1.
         // Kestenbaum 6/60 → +10 D (CV-06, Kestenbaum and Sturman 1956, exact); with 2:1 → +20 D (CV-07, derived, exact);
         // near method 4M at 40 cm for 1M at 2:1 → +20 D, EVD 5 cm (CV-08, Bailey/Lovie-Kitchin, derived, exact).
-        Assert.Matches(@"Kestenbaum&#x27;s rule \(1M at threshold\)</th><td>&#x2B;10.00 D</td>", html);
-        Assert.Matches(@"Kestenbaum&#x27;s rule with reserve</th><td>&#x2B;20.00 D</td>", html);
-        Assert.Matches(@"Near acuity \(equivalent viewing distance\)</th><td>&#x2B;20.00 D</td><td>5 cm</td>", html);
+        Assert.Matches(@"Kestenbaum&#x27;s rule \(1M at threshold\)</th><td data-label=""Equivalent power"">&#x2B;10.00 D</td>", html);
+        Assert.Matches(@"Kestenbaum&#x27;s rule with reserve</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td>", html);
+        Assert.Matches(@"Near acuity \(equivalent viewing distance\)</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td><td data-label=""Equivalent viewing distance"">5 cm</td>", html);
         Assert.Contains("The methods disagree by more than 0.2 log units.", html, StringComparison.Ordinal);
         Assert.Contains(HtmlEncoder.Default.Encode(Caution.StartingPoint.Text), html, StringComparison.Ordinal);
         Assert.Contains(HtmlEncoder.Default.Encode(Caution.NeverAtTheSun.Text), html, StringComparison.Ordinal);

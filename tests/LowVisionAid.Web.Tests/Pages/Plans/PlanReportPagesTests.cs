@@ -187,7 +187,7 @@ public sealed partial class PlanReportPagesTests
         var html = await browser.GetStringAsync(new Uri($"/Plans/{planId}/Print?for=clinician", UriKind.Relative));
 
         Assert.Equal(3, Regex.Count(html, "<svg[^>]*role=\"img\""));
-        Assert.Equal(3, Regex.Count(html, "<table class=\"trade-off-table\">"));
+        Assert.Equal(3, Regex.Count(html, "<table class=\"trade-off-table stack-narrow\">"));
         // The window holds exactly the letters the stored plan counted (22).
         Assert.Equal(22, Regex.Count(html, "class=\"" + Reports.Figures.TradeOffFigures.LetterClass + "\""));
         Assert.Contains("2026.12.1", html, StringComparison.Ordinal);
