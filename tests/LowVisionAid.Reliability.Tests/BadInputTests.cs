@@ -1,4 +1,5 @@
 using System.Net;
+using System.Text.RegularExpressions;
 using CsCheck;
 using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Text;
@@ -44,7 +45,7 @@ public sealed class BadInputTests(ITestOutputHelper output)
         Assert.True(tried >= InputsPerTarget);
     }
 
-    [Fact(Skip = "Known defect after the friendly status pages were merged in front of the security middleware: CsCheck finds form posts (e.g. seed 3sbABzytnue3 on the client form) whose refusal no longer carries the expected explanation. Passed on its own branch; to be fixed, not ignored.")]
+    [Fact]
     public async Task The_client_form_given_ten_thousand_hostile_posts_answers_each_without_a_server_error_and_explains_every_refusal()
     {
         using var app = new ClinicApp("fuzz-client", loadDemo: false);
@@ -54,28 +55,34 @@ public sealed class BadInputTests(ITestOutputHelper output)
         var saved = 0;
         var gen = Gen.Select(BadInput.Any, BadInput.Any, Gen.OneOf(BadInput.Number, BadInput.Any), BadInput.Any, Gen.Int);
 
-        gen.Sample(f =>
+        (HttpStatusCode Status, string Body) Post((string, string, string, string, int) f)
         {
-            Interlocked.Increment(ref tried);
             // A unique suffix keeps most valid-looking codes new, so both paths (saved and refused) are exercised.
             var code = f.Item5 % 3 == 0 ? $"FZ-{f.Item5}" : f.Item1;
             using var response = client.PostWithTokenAsync("/Clients/New", token,
                 [new("Input.Code", code), new("Input.Name", f.Item2), new("Input.YearOfBirth", f.Item3), new("Input.Notes", f.Item4)]).GetAwaiter().GetResult();
-            var body = response.Content.ReadAsStringAsync().GetAwaiter().GetResult();
-            if (response.StatusCode == HttpStatusCode.Redirect)
+            return (response.StatusCode, response.Content.ReadAsStringAsync().GetAwaiter().GetResult());
+        }
+
+        gen.Sample(f =>
+        {
+            Interlocked.Increment(ref tried);
+            var (status, body) = Post(f);
+            if (status == HttpStatusCode.Redirect)
             {
                 Interlocked.Increment(ref saved);
                 return true;
             }
 
-            return IsExplainedRefusal(response.StatusCode, body);
-        }, iter: InputsPerTarget, threads: 1, print: f => $"code \"{Printable(f.Item1)}\", name \"{Printable(f.Item2)}\", year \"{Printable(f.Item3)}\"");
+            return IsExplainedRefusal(status, body);
+        }, iter: InputsPerTarget, threads: 1,
+            print: f => $"code \"{Printable(f.Item1)}\", name \"{Printable(f.Item2)}\", year \"{Printable(f.Item3)}\", notes \"{Printable(f.Item4)}\", n {f.Item5}{Describe(Post(f))}");
 
         output.WriteLine($"client form: {tried} posts, {saved} saved, {tried - saved} refused with messages");
         AssertNoErrorLogged(app);
     }
 
-    [Fact(Skip = "Known defect after the friendly status pages were merged in front of the security middleware: CsCheck finds form posts (e.g. seed 3sbABzytnue3 on the client form) whose refusal no longer carries the expected explanation. Passed on its own branch; to be fixed, not ignored.")]
+    [Fact]
     public async Task The_visit_form_given_ten_thousand_hostile_posts_answers_each_without_a_server_error_and_explains_every_refusal()
     {
         using var app = new ClinicApp("fuzz-visit", loadDemo: false);
@@ -93,9 +100,8 @@ public sealed class BadInputTests(ITestOutputHelper output)
         var saved = 0;
 
         // Each post changes 1 to 4 fields of the blank form to hostile text, so each field's own check is reached.
-        Gen.Select(Gen.Int[0, fieldNames.Length - 1].Array[1, 4], BadInput.Any.Array[4]).Sample(p =>
+        (HttpStatusCode Status, string Body) Post((int[], string[]) p)
         {
-            Interlocked.Increment(ref tried);
             var fields = new List<KeyValuePair<string, string>>(blank).With(("Input.VisitDate", "2026-11-20"));
             for (var i = 0; i < p.Item1.Length; i++)
             {
@@ -103,17 +109,45 @@ public sealed class BadInputTests(ITestOutputHelper output)
             }
 
             using var response = client.PostWithTokenAsync(url, null, fields).GetAwaiter().GetResult();
-            var body = response.Content.ReadAsStringAsync().GetAwaiter().GetResult();
-            if (response.StatusCode == HttpStatusCode.Redirect)
+            return (response.StatusCode, response.Content.ReadAsStringAsync().GetAwaiter().GetResult());
+        }
+
+        // Each post changes 1 to 4 fields of the blank form to hostile text, so each field's own check is reached.
+        Gen.Select(Gen.Int[0, fieldNames.Length - 1].Array[1, 4], BadInput.Any.Array[4]).Sample(p =>
+        {
+            Interlocked.Increment(ref tried);
+            var (status, body) = Post(p);
+            if (status == HttpStatusCode.Redirect)
             {
                 Interlocked.Increment(ref saved);
                 return true;
             }
 
-            return IsExplainedRefusal(response.StatusCode, body);
-        }, iter: InputsPerTarget, threads: 1, print: p => string.Join(", ", p.Item1.Select((f, i) => $"{fieldNames[f]}=\"{Printable(p.Item2[i])}\"")));
+            return IsExplainedRefusal(status, body);
+        }, iter: InputsPerTarget, threads: 1,
+            print: p => string.Join(", ", p.Item1.Select((f, i) => $"{fieldNames[f]}=\"{Printable(p.Item2[i])}\"")) + Describe(Post(p)));
 
         output.WriteLine($"visit form: {tried} posts, {saved} saved, {tried - saved} refused with messages");
+        AssertNoErrorLogged(app);
+    }
+
+    // Found by the client-form fuzz (CsCheck seed 3sbABzytnue3): a NUL in any field makes the form unreadable, so
+    // antiforgery refuses it with an empty 400; the friendly status page, re-run as a POST over the same unreadable
+    // form, lost its status code in model binding and said "status 0" with no explanation.
+    [Theory]
+    [InlineData("/Clients/New", "Input.YearOfBirth")]
+    [InlineData("/Clients/New", "Input.Name")]
+    public async Task A_form_with_a_character_the_form_reader_refuses_is_answered_with_the_message_saying_what_to_do(string page, string field)
+    {
+        using var app = new ClinicApp("nul-form", loadDemo: false);
+        using var client = app.NewClient();
+        var token = FormClient.Token(await client.GetPageAsync(page));
+
+        using var response = await client.PostWithTokenAsync(page, token, [new("Input.Code", "NUL-1"), new(field, "25\u0000N")]);
+        var body = await response.Content.ReadAsStringAsync();
+
+        Assert.True(IsExplainedRefusal(response.StatusCode, body), Describe((response.StatusCode, body)));
+        Assert.Contains("The request could not be read", body, StringComparison.Ordinal);
         AssertNoErrorLogged(app);
     }
 
@@ -152,12 +186,21 @@ public sealed class BadInputTests(ITestOutputHelper output)
     private static bool IsExplainedRefusal(HttpStatusCode status, string body) =>
         (status == HttpStatusCode.OK && HasMessage(body)) || (status == HttpStatusCode.BadRequest && body.Contains(LowVisionAid.Web.Security.SecuritySetup.BadRequestMessage, StringComparison.Ordinal));
 
+    // Printed with a failing input: the answer the app gave to it (posted once more), so the log shows what was wrong.
+    private static string Describe((HttpStatusCode Status, string Body) reply) =>
+        $"; the app answered {(int)reply.Status} {reply.Status} with {reply.Body.Length} characters: \"{Printable(TextOf(reply.Body), 600)}\"";
+
+    // The page's words without its markup, so the printed answer shows its title and messages.
+    private static string TextOf(string html) =>
+        Regex.Replace(Regex.Replace(html, "<(script|style)[^>]*>.*?</\\1>|<[^>]+>", " ",
+            RegexOptions.Singleline), @"\s+", " ").Trim();
+
     private static void AssertNoErrorLogged(ClinicApp app)
     {
         var errors = app.Logs.Lines.Where(l => l.StartsWith(nameof(LogLevel.Error), StringComparison.Ordinal) || l.StartsWith(nameof(LogLevel.Critical), StringComparison.Ordinal)).ToList();
         Assert.True(errors.Count == 0, $"{errors.Count} error lines, e.g. {errors.FirstOrDefault()}");
     }
 
-    private static string Printable(string text) =>
-        string.Concat(text.Take(80).Select(c => char.IsControl(c) || char.IsSurrogate(c) || c > 0x7E ? $"\\u{(int)c:X4}" : c.ToString()));
+    private static string Printable(string text, int length = 80) =>
+        string.Concat(text.Take(length).Select(c => char.IsControl(c) || char.IsSurrogate(c) || c > 0x7E ? $"\\u{(int)c:X4}" : c.ToString()));
 }

@@ -1,5 +1,7 @@
-using Microsoft.AspNetCore.Mvc;
+using System.Globalization;
 using LowVisionAid.Web.Security;
+using Microsoft.AspNetCore.Diagnostics;
+using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
 namespace LowVisionAid.Web.Pages;
@@ -21,16 +23,20 @@ public sealed class StatusModel : PageModel
     /// <summary>What went wrong and what to do, for a form the app could not accept (400).</summary>
     public string? Explanation => Code == 400 ? SecuritySetup.BadRequestMessage : null;
 
-    public void OnGet(int code)
+    // No handler parameters: a refused POST is re-executed here as a POST with the same body, and when that body is
+    // the reason for the refusal (a form the reader cannot decode, e.g. a NUL character) model binding fails and a
+    // bound code would stay 0. The code comes from the status-code pages' own record, or from the route.
+    public void OnGet()
     {
-        Code = code;
+        Code = HttpContext.Features.Get<IStatusCodeReExecuteFeature>()?.OriginalStatusCode
+            ?? (int.TryParse(RouteData.Values["code"]?.ToString(), NumberStyles.None, CultureInfo.InvariantCulture, out var code) ? code : 0);
 
         // Reached directly (not re-executed for a failed request): still answer with the status it describes.
-        if (code is >= 400 and < 600)
+        if (Code is >= 400 and < 600)
         {
-            Response.StatusCode = code;
+            Response.StatusCode = Code;
         }
     }
 
-    public void OnPost(int code) => OnGet(code);
+    public void OnPost() => OnGet();
 }

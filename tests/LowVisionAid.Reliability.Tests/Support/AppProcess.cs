@@ -10,7 +10,10 @@ namespace LowVisionAid.Reliability.Tests.Support;
 /// </summary>
 public sealed class AppProcess : IDisposable
 {
+    private const int KeptLines = 200;
     private readonly Process _process;
+    private readonly Queue<string> _lastLines = new();
+    private readonly List<(string Text, TaskCompletionSource Seen)> _watches = [];
     private bool _disposed;
 
     private AppProcess(Process process, Uri address)
@@ -64,12 +67,13 @@ public sealed class AppProcess : IDisposable
 
         start.Environment["ASPNETCORE_ENVIRONMENT"] = "Production";
         start.Environment["DOTNET_gcServer"] = "0";
+        // Both pipes are always read to the end: an unread pipe fills and blocks the app's next write to its console.
         var process = Process.Start(start)!;
-        process.OutputDataReceived += (_, _) => { };
-        process.ErrorDataReceived += (_, _) => { };
+        var app = new AppProcess(process, address);
+        process.OutputDataReceived += (_, e) => app.Received(e.Data);
+        process.ErrorDataReceived += (_, e) => app.Received(e.Data);
         process.BeginOutputReadLine();
         process.BeginErrorReadLine();
-        var app = new AppProcess(process, address);
         if (waitUntilReady)
         {
             await app.WaitUntilReadyAsync(timeout);
@@ -86,7 +90,7 @@ public sealed class AppProcess : IDisposable
         {
             if (_process.HasExited)
             {
-                throw new InvalidOperationException($"The app exited with code {_process.ExitCode} while starting.");
+                throw new InvalidOperationException($"The app exited with code {_process.ExitCode} while starting. Its last output:\n{LastOutput()}");
             }
 
             try
@@ -107,7 +111,56 @@ public sealed class AppProcess : IDisposable
             await Task.Delay(100);
         }
 
-        throw new TimeoutException($"The app did not answer on {Address} within {timeout}.");
+        throw new TimeoutException($"The app did not answer on {Address} within {timeout}. Its last output:\n{LastOutput()}");
+    }
+
+    /// <summary>Waits (at most <paramref name="timeout"/>) until the app writes a line containing <paramref name="text"/>.</summary>
+    public async Task<bool> WaitForOutputAsync(string text, TimeSpan timeout)
+    {
+        var seen = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
+        lock (_lastLines)
+        {
+            if (_lastLines.Any(l => l.Contains(text, StringComparison.Ordinal)))
+            {
+                return true;
+            }
+
+            _watches.Add((text, seen));
+        }
+
+        return await Task.WhenAny(seen.Task, Task.Delay(timeout)) == seen.Task;
+    }
+
+    /// <summary>The app's last lines on its console (standard output and error), oldest first.</summary>
+    public string LastOutput()
+    {
+        lock (_lastLines)
+        {
+            return _lastLines.Count == 0 ? "(nothing)" : string.Join('\n', _lastLines.TakeLast(40));
+        }
+    }
+
+    private void Received(string? line)
+    {
+        if (line is null)
+        {
+            return;
+        }
+
+        lock (_lastLines)
+        {
+            _lastLines.Enqueue(line);
+            if (_lastLines.Count > KeptLines)
+            {
+                _lastLines.Dequeue();
+            }
+
+            foreach (var watch in _watches.Where(w => line.Contains(w.Text, StringComparison.Ordinal)).ToList())
+            {
+                watch.Seen.TrySetResult();
+                _watches.Remove(watch);
+            }
+        }
     }
 
     public FormClient NewClient()
