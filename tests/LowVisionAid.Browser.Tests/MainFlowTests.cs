@@ -117,9 +117,9 @@ public sealed class MainFlowTests(BrowserSession browser, AppServer app) : Brows
 
         public DateOnly Today { get; } = DateOnly.FromDateTime(DateTime.Now);
 
-        public DateOnly VisitDate => Today.AddDays(-3);
+        public DateOnly VisitDate { get; set; } = DateOnly.FromDateTime(DateTime.Now).AddDays(-3);
 
-        public DateOnly FollowUp => Today.AddDays(28);
+        public DateOnly FollowUp { get; set; } = DateOnly.FromDateTime(DateTime.Now).AddDays(28);
 
         public string Practitioner { get; } = "Dr Invented Example";
 

@@ -14,6 +14,7 @@ public static class SitePages
         ("Clients", "Clients"),
         ("Clients/New", "Add a client"),
         ("Clients/1", "Client DEMO-01"),
+        ("Clients/1/Edit", "Edit client DEMO-01"),
         ("Visits/New?clientId=1", "Record a visit for DEMO-01"),
         ("Visits/1", "Visit of"),
         ("Visits/1/Edit", "Edit visit for DEMO-01"),

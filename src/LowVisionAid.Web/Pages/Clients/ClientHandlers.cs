@@ -68,6 +68,64 @@ public sealed class NewClientHandler(ClinicDbContext db)
     internal static string? Blank(string? text) => string.IsNullOrWhiteSpace(text) ? null : text.Trim();
 }
 
+/// <summary>The outcome of saving an edit: saved, not found, refused (the code is taken), or changed by someone else first.</summary>
+public sealed record EditClientResult(bool Saved, bool NotFound, string? CodeError, Guid CurrentVersion, DateTime? ChangedAtUtc)
+{
+    public bool Conflict => !Saved && !NotFound && CodeError is null;
+}
+
+public sealed class EditClientHandler(ClinicDbContext db)
+{
+    /// <summary>The client as the edit form shows it; null when there is none.</summary>
+    public Task<Client?> LoadAsync(int id, CancellationToken ct) =>
+        db.Clients.AsNoTracking().FirstOrDefaultAsync(c => c.Id == id, ct);
+
+    public async Task<EditClientResult> HandleAsync(int id, ClientInput input, CancellationToken ct)
+    {
+        ArgumentNullException.ThrowIfNull(input);
+        var client = await db.Clients.FirstOrDefaultAsync(c => c.Id == id, ct).ConfigureAwait(false);
+        if (client is null)
+        {
+            return new(false, true, null, Guid.Empty, null);
+        }
+
+        // Compare against the version the editor opened, not the one just read.
+        db.Entry(client).Property(c => c.Version).OriginalValue = input.Version;
+        if (client.Version != input.Version)
+        {
+            return new(false, false, null, client.Version, client.UpdatedUtc);
+        }
+
+        var code = input.Code.Trim();
+        if (await db.Clients.AnyAsync(c => c.Code == code && c.Id != id, ct).ConfigureAwait(false))
+        {
+            return new(false, false, NewClientHandler.CodeTaken, client.Version, client.UpdatedUtc);
+        }
+
+        client.Code = code;
+        client.Name = NewClientHandler.Blank(input.Name);
+        client.YearOfBirth = input.ParsedYearOfBirth;
+        client.Notes = NewClientHandler.Blank(input.Notes);
+        db.Entry(client).State = EntityState.Modified;
+        try
+        {
+            await db.SaveChangesAsync(ct).ConfigureAwait(false);
+            return new(true, false, null, client.Version, client.UpdatedUtc);
+        }
+        catch (DbUpdateConcurrencyException)
+        {
+            var current = await db.Clients.AsNoTracking().Where(c => c.Id == id)
+                .Select(c => new { c.Version, c.UpdatedUtc }).FirstOrDefaultAsync(ct).ConfigureAwait(false);
+            return current is null ? new(false, true, null, Guid.Empty, null) : new(false, false, null, current.Version, current.UpdatedUtc);
+        }
+        catch (DbUpdateException e) when (e.InnerException is Microsoft.Data.Sqlite.SqliteException { SqliteExtendedErrorCode: 2067 })
+        {
+            // Another client took the same code at the same moment: the unique index let only one in (SQLITE_CONSTRAINT_UNIQUE).
+            return new(false, false, NewClientHandler.CodeTaken, input.Version, null);
+        }
+    }
+}
+
 public sealed record ClientVisitRow(int Id, DateOnly Date, string? Practitioner, string? DistanceBoth, int Plans);
 
 public sealed record ClientTrialRow(int Id, int PlanId, DateOnly Date, string Device, TrialOutcome Outcome, DateOnly? FollowUpDue, DateOnly? FollowUpDone);

@@ -15,6 +15,9 @@ public sealed class ClientInput
 
     public string? Notes { get; set; }
 
+    /// <summary>The client's version when the form was opened (edits only).</summary>
+    public Guid Version { get; set; }
+
     public int? ParsedYearOfBirth => int.TryParse(YearOfBirth?.Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out var year) ? year : null;
 }
 
