@@ -22,7 +22,7 @@ public sealed class TradeOffFigures(IFormatProvider? formatProvider = null)
     private const double LetterPitch = 1.1;
     // Only letters about one x-height wide (a, b, c, d, e, g, h, k, n, o, p, q, s, u, v, x, y, z), so that the
     // letters drawn at pitch k fill the window as text of that pitch would; no i, l, m or w.
-    private const string SampleLetters = "codebookshopsandsunnydaysneedgoodbooks";
+    internal const string SampleLetters = "codebookshopsandsunnydaysneedgoodbooks";
 
     // ISO 3 R10 preferred numbers, the 0.1 log-unit steps of letter charts (ISO 8596; methods.md §1.5).
     private static readonly double[] PreferredSteps = [1.00, 1.25, 1.60, 2.00, 2.50, 3.15, 4.00, 5.00, 6.30, 8.00];

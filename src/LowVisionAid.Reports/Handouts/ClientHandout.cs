@@ -57,13 +57,24 @@ public sealed record ClientHandout(
 /// <param name="HowToUse">Steps for holding or setting it.</param>
 /// <param name="Distances">The distances to keep, each printed in centimetres and inches.</param>
 /// <param name="HasLightOrBattery">True for illuminated or electronic devices (adds the charging caution).</param>
+/// <param name="View">What the client sees through it at once (drawn to size with its text equivalent), or null.</param>
 public sealed record HandoutDevice(
     string Name,
     string WhatItIs,
     string Task,
     IReadOnlyList<string> HowToUse,
     IReadOnlyList<HandoutDistance> Distances,
-    bool HasLightOrBattery = false);
+    bool HasLightOrBattery = false,
+    HandoutView? View = null);
+
+/// <summary>
+/// What the client sees through the device at once, for the handout's to-scale window: the field on the page and
+/// how many letters of the target print fit in it (the plan's own count, never recomputed here).
+/// </summary>
+/// <param name="Field">The width of the page seen through the device.</param>
+/// <param name="LettersInView">Letters of <paramref name="Target"/> in that width, as the plan counted them.</param>
+/// <param name="Target">The print the client wants to read with this device.</param>
+public sealed record HandoutView(Distance Field, int LettersInView, PrintSize Target);
 
 /// <summary>A distance the client keeps, e.g. "Lens to page" and 8 cm.</summary>
 /// <param name="What">What the distance is between, in plain words.</param>

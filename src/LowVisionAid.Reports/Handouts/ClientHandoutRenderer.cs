@@ -88,6 +88,13 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
                     List(device.Distances.Select(d => d.What + ": " + Length(d.Distance)));
                 }
 
+                if (device.View is { LettersInView: > 0 } view && view.Field.Abs().Millimetres > 0 && view.Target.IsValid)
+                {
+                    flow.Space(line * 0.2);
+                    flow.Paragraph(HandoutWording.ViewHeading, bold, line);
+                    DrawView(flow, view, line, Text);
+                }
+
                 if (device.HowToUse.Count > 0)
                 {
                     flow.Space(line * 0.2);
@@ -132,6 +139,33 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
         }
 
         return ReportResult.Ok(PdfOutput.Save(document), FileNames.For("handout", model.ClientCode));
+    }
+
+    /// <summary>The letters drawn in the handout's window: the figures' set, none much wider than an x-height.</summary>
+    internal const string ViewLetters = Figures.TradeOffFigures.SampleLetters;
+
+    // The window is the field on the page at full size (1 pt = 25.4/72 mm); the letters are the target print at
+    // its size in this face, spaced 1.1 x-heights apart (methods §4.2), or closer when the plan's count would
+    // otherwise run the last letter (at most 1.25 x-heights wide) past the window's edge.
+    private void DrawView(PageFlow flow, HandoutView view, double line, Action<string> text)
+    {
+        const double PointsPerMillimetre = 72 / 25.4;
+        const double Border = 3;
+        double width = (view.Field.Abs().Millimetres * PointsPerMillimetre) + (Border * 2);
+        bool drawn = width <= flow.Width;
+        text(HandoutWording.ViewText(view.LettersInView, Length(view.Field), drawn));
+        if (!drawn)
+            return;
+
+        double points = PointsFor(view.Target);
+        double xHeight = view.Target.XHeightMillimetres * PointsPerMillimetre;
+        double inner = width - (Border * 2);
+        double pitch = view.LettersInView == 1 ? 0 : Math.Min(xHeight * 1.1, (inner - (xHeight * 1.25)) / (view.LettersInView - 1));
+        var font = new XFont(HyperlegibleFont.FamilyName, points, XFontStyleEx.Regular);
+        var letters = string.Concat(Enumerable.Range(0, view.LettersInView).Select(n => ViewLetters[n % ViewLetters.Length]));
+        flow.Space(line * 0.3);
+        flow.Window(width, Math.Max(points * 2.2, line * 1.5), letters, font, pitch, Border);
+        flow.Space(line * 0.3);
     }
 
     private static string? Validate(ClientHandout model)

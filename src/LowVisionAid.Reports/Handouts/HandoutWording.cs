@@ -1,3 +1,4 @@
+using System.Globalization;
 namespace LowVisionAid.Reports.Handouts;
 
 /// <summary>
@@ -43,4 +44,19 @@ public static class HandoutWording
     /// <summary>The cautions every handout prints, in order.</summary>
     public static IReadOnlyList<string> Cautions { get; } =
         [SunlightFire, NoSunViewing, DoNotMove, DrivingRules, SupportsPractitioner, SuddenChange, SeeingThingsNotThere];
+
+    /// <summary>The heading of the to-scale window of what the client sees at once.</summary>
+    public const string ViewHeading = "What you see at once";
+
+    /// <summary>
+    /// The window's text equivalent: how many letters fit, across how much of the page, and what the box shows.
+    /// </summary>
+    /// <param name="letters">Letters of the client's print in view.</param>
+    /// <param name="across">The width of the page seen, already formatted (e.g. "3.5 cm (1.4 inches)").</param>
+    /// <param name="drawn">False when the width is too large to draw on the sheet.</param>
+    public static string ViewText(int letters, string across, bool drawn) =>
+        string.Create(CultureInfo.InvariantCulture, $"Through it you see about {letters} {(letters == 1 ? "letter" : "letters")} of your print at once, across {across} of the page.")
+        + (drawn
+            ? " The box below is that part of the page, drawn to size, with the letters at the size of your print."
+            : " That is wider than this sheet, so it is not drawn here.");
 }

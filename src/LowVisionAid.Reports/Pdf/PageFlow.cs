@@ -95,6 +95,22 @@ internal sealed class PageFlow : IDisposable
         }
     }
 
+    /// <summary>
+    /// A box <paramref name="width"/> points wide drawn to size with a heavy black border, holding
+    /// <paramref name="letters"/> drawn at <paramref name="font"/>'s size every <paramref name="pitch"/> points from its
+    /// left edge, on one baseline. Moves to a new page whole.
+    /// </summary>
+    public void Window(double width, double height, string letters, XFont font, double pitch, double border)
+    {
+        KeepTogether(height + border * 2);
+        double top = Y + border / 2;
+        Graphics.DrawRectangle(new XPen(XColors.Black, border), Left + border / 2, top, width - border, height);
+        double baseline = top + (height / 2) + (font.Size * 0.25);
+        for (int n = 0; n < letters.Length; n++)
+            Graphics.DrawString(letters[n].ToString(), font, XBrushes.Black, Left + border + (pitch * n), baseline);
+        Y += height + border * 2;
+    }
+
     /// <summary>Ends the layout and draws "Page i of n" and <paramref name="footerText"/> at the foot of every page.</summary>
     public void Finish(string footerText, XFont font)
     {

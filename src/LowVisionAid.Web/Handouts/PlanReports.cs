@@ -35,7 +35,8 @@ public sealed class PlanReports(
             o.Task,
             HandoutTexts.HowToUse(o.Family),
             Distances(o),
-            o.HasLightOrBattery)).ToList();
+            o.HasLightOrBattery,
+            o.Field is { } field && o.LettersInView is > 0 ? new HandoutView(field, o.LettersInView.Value, o.Target) : null)).ToList();
         return new ClientHandout(
             plan.Clinic,
             plan.ClientCode,

@@ -75,6 +75,27 @@ public sealed partial class PlanReportPagesTests
     }
 
     [Fact]
+    public async Task The_handout_draws_what_the_client_sees_at_once_with_the_letters_the_plan_counted()
+    {
+        using var app = new ClinicApp();
+        using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "H-3");
+
+        var pdf = Read(await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/Handout", UriKind.Relative)));
+
+        // The engine's count as the plan stored it, and the derived check value (22, see the class notes).
+        var stored = await app.WithDbAsync(db => db.Plans.Where(p => p.Id == planId).Select(p => p.OutputsJson).SingleAsync());
+        var kit = Web.Pages.Plans.PlanJson.Read<Web.Pages.Plans.PlanSnapshot>(stored).Goals[0].KitDevices.Single(o => o.KitCode == "HM-08");
+        var counted = int.Parse(kit.Figures.Single(f => f.Label == "Letters in view").Value, CultureInfo.InvariantCulture);
+        Assert.Equal(22, counted);
+        Assert.Contains(Normalise(HandoutWording.ViewText(counted, "3.5 cm (1.4 inches)", drawn: true)), pdf.Text, StringComparison.Ordinal);
+        double target = ClientHandoutRenderer.PointsFor(Optics.Quantities.PrintSize.FromM(1.0));
+        var drawn = pdf.Letters.Count(l => !string.IsNullOrWhiteSpace(l.Value) && Math.Abs(l.PointSize - target) < 0.01)
+            - HandoutWording.TargetSizeLine.Count(c => c != ' ');
+        Assert.Equal(counted, drawn);
+    }
+
+    [Fact]
     public async Task The_summary_pdf_holds_the_inputs_the_estimates_every_figure_the_trials_and_the_method_version()
     {
         using var app = new ClinicApp();
@@ -327,7 +348,9 @@ public sealed partial class PlanReportPagesTests
             letters.AddRange(page.Letters);
         }
 
-        return new PdfRead(string.Join(' ', words), letters, document.NumberOfPages);
+        // Each page's footer ("Page 2 of 4 · Client code H-1") is taken out, so a sentence running onto the next
+        // page reads as one.
+        return new PdfRead(Footer().Replace(string.Join(' ', words), ""), letters, document.NumberOfPages);
     }
 
     private static void AssertWords(string cell, string text)
@@ -343,6 +366,9 @@ public sealed partial class PlanReportPagesTests
 
     [GeneratedRegex(@"\s+")]
     private static partial Regex Spaces();
+
+    [GeneratedRegex(@"Page \d+ of \d+ · Client code \S+ ?")]
+    private static partial Regex Footer();
 
     [GeneratedRegex("<svg class=\"check-word\"[^>]*><text [^>]*font-size=\"([0-9.]+)\"[^>]*>([^<]*)</text>")]
     private static partial Regex CheckWords();
