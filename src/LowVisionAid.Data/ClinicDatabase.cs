@@ -1,3 +1,4 @@
+using LowVisionAid.Data.Access;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 
@@ -29,5 +30,24 @@ public static class ClinicDatabase
     {
         ArgumentNullException.ThrowIfNull(options);
         return options.UseSqlite(connectionString, sqlite => sqlite.MigrationsAssembly(MigrationsAssembly));
+    }
+
+    /// <summary>
+    /// Brings the database to the current schema: first a database from the two-context version is recognised
+    /// (<see cref="AccessHistoryUpgrade"/>), then every pending migration is applied. Use this, never
+    /// <c>Database.Migrate</c> alone, wherever the app upgrades a database (start-up, restore, commands).
+    /// </summary>
+    public static async Task UpgradeAsync(this ClinicDbContext db, CancellationToken ct = default)
+    {
+        ArgumentNullException.ThrowIfNull(db);
+        await AccessHistoryUpgrade.AdoptAsync(db, ct).ConfigureAwait(false);
+        await db.Database.MigrateAsync(ct).ConfigureAwait(false);
+    }
+
+    /// <summary>Every migration id a LowVisionAid database may record: this build's, and the earlier separate access history's.</summary>
+    public static IReadOnlySet<string> KnownMigrations(this ClinicDbContext db)
+    {
+        ArgumentNullException.ThrowIfNull(db);
+        return db.Database.GetMigrations().Concat(AccessHistoryUpgrade.EarlierMigrations).ToHashSet(StringComparer.Ordinal);
     }
 }

@@ -1,12 +1,19 @@
+using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Conversions;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Quantities;
+using Microsoft.AspNetCore.Identity;
+using Microsoft.AspNetCore.Identity.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Data;
 
-/// <summary>The clinic's one database: clients, visits, plans, trials, the kit and the settings.</summary>
-public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, TimeProvider? clock = null) : DbContext(options)
+/// <summary>
+/// The clinic's one database: clients, visits, plans, trials, the kit and the settings, who may sign in (ASP.NET
+/// Core Identity: users, hashed passwords, lockout, roles) and the audit trail. One context, one migration history.
+/// </summary>
+public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, TimeProvider? clock = null)
+    : IdentityDbContext<IdentityUser, IdentityRole, string>(options)
 {
     private readonly TimeProvider _clock = clock ?? TimeProvider.System;
 
@@ -26,9 +33,12 @@ public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, T
 
     public DbSet<ClinicSettings> Settings => Set<ClinicSettings>();
 
+    public DbSet<AuditEntry> AuditEntries => Set<AuditEntry>();
+
     protected override void ConfigureConventions(ModelConfigurationBuilder configurationBuilder)
     {
         ArgumentNullException.ThrowIfNull(configurationBuilder);
+        base.ConfigureConventions(configurationBuilder);
         configurationBuilder.Properties<Power>().HaveConversion<PowerConverter>();
         configurationBuilder.Properties<Distance>().HaveConversion<DistanceConverter>();
         configurationBuilder.Properties<PrintSize>().HaveConversion<PrintSizeConverter>();
@@ -38,8 +48,12 @@ public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, T
         configurationBuilder.Properties<Enum>().HaveConversion<string>().HaveMaxLength(40);
     }
 
-    protected override void OnModelCreating(ModelBuilder modelBuilder) =>
-        modelBuilder.ApplyConfigurationsFromAssembly(typeof(ClinicDbContext).Assembly);
+    // Identity's own tables are configured by IdentityDbContext; every other entity has its configuration in Configurations/.
+    protected override void OnModelCreating(ModelBuilder builder)
+    {
+        base.OnModelCreating(builder);
+        builder.ApplyConfigurationsFromAssembly(typeof(ClinicDbContext).Assembly);
+    }
 
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {

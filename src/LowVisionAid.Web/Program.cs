@@ -1,7 +1,13 @@
 using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Web.Security;
 
-var builder = WebApplication.CreateBuilder(args);
+// `create-admin --user <name>` creates an administrator and exits without starting the server (docs/security.md).
+var adminCommand = AdminCommandLine.Parse(args);
+var builder = WebApplication.CreateBuilder(adminCommand?.HostArgs ?? args);
+if (adminCommand is not null)
+{
+    builder.Logging.SetMinimumLevel(LogLevel.Warning);
+}
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
 if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(builder.Configuration["ASPNETCORE_URLS"]))
@@ -19,6 +25,11 @@ builder.Services.AddCalculationApi();       // JSON API for plans and conversion
 builder.AddPlanHandouts();                  // handout and summary PDFs, trade-off figures and the print view of a plan
 
 var app = builder.Build();
+if (adminCommand is not null)
+{
+    return await CreateAdminCommand.RunAsync(app.Services, adminCommand, CreateAdminCommand.ReadFromConsole, askTwice: !Console.IsInputRedirected, Console.Out, Console.Error, CancellationToken.None).ConfigureAwait(false);
+}
+
 await using (await StartUpLock.TakeAsync(app).ConfigureAwait(false))   // one start at a time; frees a migration lock a killed start left
 {
     await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
@@ -37,5 +48,7 @@ app.UseRouting();
 app.UseClinicSignIn();             // authentication and authorization
 app.MapRazorPages();
 app.MapCalculationApi();
+app.MapHandoutFonts();             // the handout face for the print view, from the Reports assembly (one copy in the repo)
 
 await app.RunAsync().ConfigureAwait(false);
+return 0;

@@ -103,6 +103,46 @@ public sealed class KeyboardTests(BrowserSession browser, AppServer app) : Brows
         await Artifacts.ScreenshotAsync(Page, "keyboard-display-saved");
     }
 
+    [Theory]
+    [InlineData("Clients/New", "Input_Code", "", "Save client")]
+    [InlineData("Visits/New?clientId=1", "Input_DistanceRight", "6/0", "Save visit")]
+    [InlineData("Trials/New?planId=1", "Input_TrialDate", "", "Save trial")]
+    [InlineData("Kit/New", "Input_Code", "", "Add device")]
+    [InlineData("Calculator", "Input_DistanceAcuity", "6/0", "Work out the plan")]
+    public async Task A_refused_form_puts_the_focus_on_the_one_error_summary_whose_links_lead_into_each_field(string path, string fieldId, string typed, string button)
+    {
+        // Arrange: one field left empty or mistyped.
+        await Page.GotoAsync(path);
+        await Page.Locator("#" + fieldId).FillAsync(typed);
+
+        // Act: send the form from the keyboard.
+        await Page.GetByRole(AriaRole.Button, new() { Name = button, Exact = true }).FocusAsync();
+        await Page.Keyboard.PressAsync("Enter");
+
+        // Assert: the summary (an alert with a heading) has the focus, and each of its links names a field on the page.
+        var summary = Page.Locator(".error-summary");
+        await Assertions.Expect(summary).ToHaveCountAsync(1);
+        await Assertions.Expect(summary).ToHaveAttributeAsync("role", "alert");
+        await Assertions.Expect(summary).ToBeFocusedAsync();
+        await Assertions.Expect(summary.GetByRole(AriaRole.Heading, new() { Level = 2 })).ToHaveTextAsync(new System.Text.RegularExpressions.Regex("^There (is 1 problem|are [0-9]+ problems) to fix$"));
+        var links = await summary.GetByRole(AriaRole.Link).AllAsync();
+        Assert.NotEmpty(links);
+        foreach (var link in links)
+        {
+            var target = (await link.GetAttributeAsync("href"))!.TrimStart('#');
+            Assert.True(await Page.EvaluateAsync<bool>("id => document.getElementById(id) !== null", target), $"The summary on /{path} links to #{target}, which is not on the page.");
+        }
+
+        await Artifacts.ScreenshotAsync(Page, $"keyboard-error-summary-{path}", fullPage: false);
+
+        // The first Tab reaches the first link, and Enter on it puts the focus in its field.
+        await Page.Keyboard.PressAsync("Tab");
+        await Assertions.Expect(links[0]).ToBeFocusedAsync();
+        var firstTarget = (await links[0].GetAttributeAsync("href"))!.TrimStart('#');
+        await Page.Keyboard.PressAsync("Enter");
+        Assert.Equal(firstTarget, await new SiteChrome(Page).FocusedIdAsync());
+    }
+
     private async Task TabUntilFocusedAsync(ILocator target, int limit = 40)
     {
         for (var i = 0; i < limit; i++)

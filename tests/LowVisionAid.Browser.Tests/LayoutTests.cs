@@ -9,7 +9,7 @@ namespace LowVisionAid.Browser.Tests;
 public sealed class LayoutTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
 {
     [Theory]
-    [MemberData(nameof(SitePages.ReflowingPathsInBothSchemes), MemberType = typeof(SitePages))]
+    [MemberData(nameof(SitePages.PathsInBothSchemes), MemberType = typeof(SitePages))]
     public async Task Every_page_reflows_at_320_css_pixels_without_sideways_scrolling(string path, string heading, bool highContrast)
     {
         // Arrange: 320 × 256 CSS px is the WCAG reflow case (1280 px at 400%). Large text makes it harder still.
@@ -23,16 +23,17 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         await Assertions.Expect(chrome.Heading).ToHaveTextAsync(SitePages.HeadingPattern(heading));
         await Artifacts.ScreenshotAsync(page, $"reflow-320-{(path.Length == 0 ? "home" : path)}-{(highContrast ? "contrast" : "standard")}");
         Assert.False(await chrome.ScrollsSidewaysAsync(), $"/{path} scrolls sideways at 320 CSS px.");
+        await AssertNothingRunsOffTheWindowAsync(page, $"/{path} at 320 CSS px");
         await AssertEveryNavigationLinkFitsAsync(page, chrome, 320);
     }
 
     [Theory]
-    [MemberData(nameof(SitePages.Paths), MemberType = typeof(SitePages))]
-    public async Task Every_page_is_usable_at_200_percent_zoom(string path, string heading)
+    [MemberData(nameof(SitePages.PathsInBothTextSizes), MemberType = typeof(SitePages))]
+    public async Task Every_page_is_usable_at_200_percent_zoom(string path, string heading, bool largeText)
     {
         // Arrange: browser zoom at 200% on a 1280 × 900 window lays the page out in 640 × 450 CSS px at twice the
-        // pixel density, which is what this context emulates.
-        var page = await NewPageAsync(640, 450, scale: 2);
+        // pixel density, which is what this context emulates; the larger-text setting on top of it too.
+        var page = await NewPageAsync(640, 450, scale: 2, largeText: largeText);
         var chrome = new SiteChrome(page);
 
         // Act
@@ -40,8 +41,10 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
 
         // Assert
         await Assertions.Expect(chrome.Heading).ToHaveTextAsync(SitePages.HeadingPattern(heading));
-        await Artifacts.ScreenshotAsync(page, $"zoom-200-{(path.Length == 0 ? "home" : path)}");
+        // The window only: a full-page capture of the long plan page at twice the density outlasts the timeout.
+        await Artifacts.ScreenshotAsync(page, $"zoom-200-{(path.Length == 0 ? "home" : path)}-{(largeText ? "large" : "standard")}", fullPage: false);
         Assert.False(await chrome.ScrollsSidewaysAsync(), $"/{path} scrolls sideways at 200% zoom.");
+        await AssertNothingRunsOffTheWindowAsync(page, $"/{path} at 200% zoom");
         await AssertEveryNavigationLinkFitsAsync(page, chrome, 640);
         var fontSize = await page.EvaluateAsync<double>("() => parseFloat(getComputedStyle(document.body).fontSize)");
         Assert.True(fontSize >= 18, $"Body text is {fontSize} CSS px; it should be at least 18 before zoom.");
@@ -82,12 +85,126 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         await Assertions.Expect(calculator.Flag).ToBeVisibleAsync();
         await Artifacts.ScreenshotAsync(page, "reflow-320-calculator-plan");
         Assert.False(await new SiteChrome(page).ScrollsSidewaysAsync(), "The calculator's plan scrolls sideways at 320 CSS px.");
+        await AssertNothingRunsOffTheWindowAsync(page, "The calculator's plan at 320 CSS px");
     }
+
+    [Fact]
+    public async Task A_wide_table_scrolls_inside_its_own_labelled_region_reached_and_scrolled_by_the_keyboard()
+    {
+        // Arrange: the kit's seven columns do not fit 320 CSS px with large text.
+        var page = await NewPageAsync(320, 256, largeText: true);
+        await page.GotoAsync("Kit");
+        var region = page.GetByRole(AriaRole.Region, new() { Name = "Devices in the clinic's trial kit" });
+        await Assertions.Expect(region).ToHaveAttributeAsync("tabindex", "0");
+        Assert.True(await region.EvaluateAsync<bool>("r => r.scrollWidth > r.clientWidth"), "The kit table fits 320 px, so this test no longer checks a scrolling region.");
+
+        // Act: Tab until the region has focus, then scroll it with the arrow key.
+        for (var i = 0; i < 40 && !await region.EvaluateAsync<bool>("r => r === document.activeElement"); i++)
+        {
+            await page.Keyboard.PressAsync("Tab");
+        }
+
+        await Assertions.Expect(region).ToBeFocusedAsync();
+        var outline = await region.EvaluateAsync<string>("r => getComputedStyle(r).outlineStyle");
+        for (var i = 0; i < 10; i++)
+        {
+            await page.Keyboard.PressAsync("ArrowRight");
+        }
+
+        // Assert: the region moved, the page did not, and its focus is drawn.
+        await Artifacts.ScreenshotAsync(page, "reflow-320-kit-region-scrolled", fullPage: false);
+        Assert.True(await region.EvaluateAsync<double>("r => r.scrollLeft") > 0, "ArrowRight did not scroll the focused table region.");
+        Assert.Equal(0, await page.EvaluateAsync<double>("() => window.scrollX"));
+        Assert.Equal("solid", outline);
+    }
+
+    [Fact]
+    public async Task The_overflow_check_catches_an_unlabelled_scroller_and_a_box_past_the_edge_but_not_a_declared_region()
+    {
+        // Arrange: a page that fits, then three wide boxes added to it.
+        var page = await NewPageAsync(320, 256);
+        await page.GotoAsync("");
+        // Styles are set through the CSSOM: the CSP refuses inline style attributes.
+        await page.EvaluateAsync("""
+            () => {
+                const main = document.getElementById('main');
+                main.insertAdjacentHTML('beforeend',
+                    '<div id="plain-scroller"><div>wide</div></div><p id="too-wide">wide</p>' +
+                    '<div id="region" role="region" aria-label="Wide table" tabindex="0"><div>wide</div></div>');
+                for (const id of ['plain-scroller', 'region']) {
+                    const box = document.getElementById(id);
+                    box.style.overflowX = 'auto';
+                    box.firstElementChild.style.width = '600px';
+                }
+                document.getElementById('too-wide').style.width = '600px';
+                document.getElementById('too-wide').style.maxWidth = 'none';
+            }
+            """);
+        Assert.True(await page.EvaluateAsync<bool>("() => { const r = document.getElementById('region'); return r.scrollWidth > r.clientWidth; }"), "The region does not overflow, so this test checks nothing about it.");
+
+        // Act
+        var problems = await page.EvaluateAsync<string[]>(OverflowScript);
+
+        // Assert
+        Assert.Contains(problems, p => p.StartsWith("div#plain-scroller scrolls sideways", StringComparison.Ordinal));
+        Assert.Contains(problems, p => p.StartsWith("p#too-wide runs from", StringComparison.Ordinal));
+        Assert.DoesNotContain(problems, p => p.Contains("#region", StringComparison.Ordinal));
+    }
+
+    /// <summary>
+    /// No element reaches past either side of the window, unless it sits inside a region that scrolls on its own
+    /// and that a keyboard can reach and a screen reader can name (role="region", tabindex="0", a label), or inside
+    /// an element that clips it on purpose (the visually hidden text). Every element that scrolls sideways must be
+    /// such a region. The document-width check alone misses content cut off by an unlabelled scroller.
+    /// </summary>
+    private static async Task AssertNothingRunsOffTheWindowAsync(IPage page, string where)
+    {
+        var problems = await page.EvaluateAsync<string[]>(OverflowScript);
+        Assert.True(problems.Length == 0, $"{where}: " + string.Join("; ", problems));
+    }
+
+    private const string OverflowScript = """
+        () => {
+            const width = document.documentElement.clientWidth;
+            const describe = el => el.tagName.toLowerCase() + (el.id ? '#' + el.id : '') + [...el.classList].map(c => '.' + c).join('');
+            const overflowX = el => getComputedStyle(el).overflowX;
+            const scrolls = el => ['auto', 'scroll'].includes(overflowX(el));
+            const clips = el => ['hidden', 'clip'].includes(overflowX(el));
+            const isRegion = el => el.getAttribute('role') === 'region' && el.tabIndex === 0
+                && (el.hasAttribute('aria-label') || el.hasAttribute('aria-labelledby'));
+            const problems = [];
+            for (const el of document.body.querySelectorAll('*')) {
+                if (scrolls(el) && el.scrollWidth > el.clientWidth + 1 && !isRegion(el)) {
+                    problems.push(describe(el) + ' scrolls sideways but is not a focusable, labelled region');
+                }
+                const box = el.getBoundingClientRect();
+                if (box.width === 0 || box.height === 0 || (box.left >= -1 && box.right <= width + 1)) continue;
+                let inside = false;
+                for (let a = el.parentElement; a && a !== document.body; a = a.parentElement) {
+                    if ((scrolls(a) && isRegion(a)) || clips(a)) { inside = true; break; }
+                }
+                if (!inside) {
+                    problems.push(describe(el) + ' runs from x ' + Math.round(box.left) + ' to ' + Math.round(box.right)
+                        + ' (' + (el.textContent || '').trim().slice(0, 40) + ')');
+                }
+            }
+            return problems.slice(0, 8);
+        }
+        """;
 
     private static async Task AssertEveryNavigationLinkFitsAsync(IPage page, SiteChrome chrome, int width)
     {
-        var links = await chrome.Navigation.GetByRole(AriaRole.Link).AllAsync();
-        Assert.Equal(6, links.Count);
+        var standalone = SitePages.WithoutSiteNavigation.Any(p => page.Url.EndsWith("/" + p, StringComparison.Ordinal));
+        var links = await (standalone ? chrome.Main.GetByRole(AriaRole.Link) : chrome.Navigation.GetByRole(AriaRole.Link)).AllAsync();
+        if (standalone)
+        {
+            Assert.NotEmpty(links);
+        }
+        else
+        {
+            Assert.Equal(6, links.Count);
+        }
+
         foreach (var link in links)
         {
             var box = await link.BoundingBoxAsync();

@@ -1,6 +1,6 @@
 using System.Net;
 using System.Text;
-using LowVisionAid.Data.Access;
+using LowVisionAid.Data;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Reliability.Tests.Support;
 using Microsoft.EntityFrameworkCore;
@@ -57,7 +57,7 @@ public sealed class AuditAndPrivacyTests
 
         // Assert
         var logs = app.Logs.Lines.ToList();
-        var audit = await app.ServiceAsync(sp => sp.GetRequiredService<AccessDbContext>().AuditEntries.AsNoTracking().ToListAsync());
+        var audit = await app.ServiceAsync(sp => sp.GetRequiredService<ClinicDbContext>().AuditEntries.AsNoTracking().ToListAsync());
         var auditText = string.Join('\n', audit.Select(a => $"{a.Actor} {a.Action} {a.RecordType} {a.RecordId} {a.Detail}"));
         Assert.True(logs.Count > 100, $"Only {logs.Count} log lines were captured; the capture is not working.");
         foreach (var secret in Secrets)
@@ -92,7 +92,7 @@ public sealed class AuditAndPrivacyTests
         {
         }
 
-        var lines = await app.ServiceAsync(sp => sp.GetRequiredService<AccessDbContext>().AuditEntries.AsNoTracking().Where(e => e.AtUtc >= started).ToListAsync());
+        var lines = await app.ServiceAsync(sp => sp.GetRequiredService<ClinicDbContext>().AuditEntries.AsNoTracking().Where(e => e.AtUtc >= started).ToListAsync());
         var page = await client.GetPageAsync("/Admin/Audit?type=Client&id=" + clientId.ToString(CultureInfo.InvariantCulture));
 
         Assert.Contains(lines, l => l is { Action: AuditAction.Created, RecordType: "Client" } && l.RecordId == clientId);
@@ -116,7 +116,7 @@ public sealed class AuditAndPrivacyTests
 
         var clientId = await ClinicForms.AddClientAsync(client, "AU-LOCAL");
 
-        var line = await app.ServiceAsync(sp => sp.GetRequiredService<AccessDbContext>().AuditEntries.AsNoTracking()
+        var line = await app.ServiceAsync(sp => sp.GetRequiredService<ClinicDbContext>().AuditEntries.AsNoTracking()
             .SingleAsync(e => e.RecordType == "Client" && e.RecordId == clientId));
         Assert.Equal(AuditActors.LocalUser, line.Actor);
         Assert.Equal(AuditAction.Created, line.Action);
@@ -128,7 +128,7 @@ public sealed class AuditAndPrivacyTests
         using var app = new ClinicApp("audit-rollback", loadDemo: false);
         using var client = app.NewClient();
         await client.GetPageAsync("/");
-        var before = await app.ServiceAsync(sp => sp.GetRequiredService<AccessDbContext>().AuditEntries.CountAsync());
+        var before = await app.ServiceAsync(sp => sp.GetRequiredService<ClinicDbContext>().AuditEntries.CountAsync());
 
         var failed = await app.ServiceAsync(async sp =>
         {
@@ -139,7 +139,7 @@ public sealed class AuditAndPrivacyTests
         });
 
         Assert.IsType<DbUpdateException>(failed);
-        Assert.Equal(before, await app.ServiceAsync(sp => sp.GetRequiredService<AccessDbContext>().AuditEntries.CountAsync()));
+        Assert.Equal(before, await app.ServiceAsync(sp => sp.GetRequiredService<ClinicDbContext>().AuditEntries.CountAsync()));
         Assert.Equal(0, DatabaseDump.Scalar(app.Data.DatabasePath, "SELECT COUNT(*) FROM Clients"));
     }
 }

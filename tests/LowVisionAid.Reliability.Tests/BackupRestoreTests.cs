@@ -1,10 +1,10 @@
 using System.Net;
 using LowVisionAid.Data;
-using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Backup;
 using LowVisionAid.Reliability.Tests.Support;
 using LowVisionAid.Web.Security;
+using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
 
@@ -127,18 +127,16 @@ public sealed class BackupRestoreTests
     [Fact]
     public async Task Starting_on_a_database_with_pending_migrations_takes_a_backup_of_it_first()
     {
-        // Arrange: a database as an earlier version left it (clinic schema only, no access schema yet), with one client
+        // Arrange: a database as an earlier version left it (clinic schema only, no sign-in or audit tables yet), with one client
         using var data = new TempFolder("pre-migration");
-        var builder = new DbContextOptionsBuilder<ClinicDbContext>();
-        builder.UseClinicSqlite(ClinicDatabase.ConnectionStringFor(data.Path));
-        var options = builder.Options;
-        await using (var db = new ClinicDbContext(options))
+        await TwoContextSchema.BuildAsync(data.Path, TwoContextSchema.ClinicMigrationThen, withAccess: false);
+        await using (var db = TwoContextSchema.Context(data.Path))
         {
-            await db.Database.MigrateAsync();
             db.Clients.Add(new LowVisionAid.Data.Entities.Client { Code = "OLD-001", Name = "Invented Earlier Client" });
             await db.SaveChangesAsync();
         }
 
+        SqliteConnection.ClearAllPools();
         var old = DatabaseDump.Read(data.DatabasePath);
 
         // Act
@@ -151,8 +149,8 @@ public sealed class BackupRestoreTests
         var automatic = Assert.Single(backups);
         Assert.EndsWith("-before-migration.db", automatic.Name, StringComparison.Ordinal);
         Assert.Equal(old, DatabaseDump.Read(automatic.Path));
-        Assert.DoesNotContain(AccessDbContext.MigrationsHistoryTable, DatabaseDump.Read(automatic.Path).Keys);
-        Assert.Contains(AccessDbContext.MigrationsHistoryTable, DatabaseDump.Read(data.DatabasePath).Keys);
+        Assert.DoesNotContain("AspNetUsers", DatabaseDump.Read(automatic.Path).Keys);
+        Assert.Contains("AspNetUsers", DatabaseDump.Read(data.DatabasePath).Keys);
     }
 
     [Fact]
@@ -173,5 +171,5 @@ public sealed class BackupRestoreTests
     }
 
     private static IReadOnlySet<string> Known(ClinicApp app) =>
-        app.Service(sp => SecuritySetup.KnownMigrations(sp.GetRequiredService<ClinicDbContext>(), sp.GetRequiredService<AccessDbContext>()));
+        app.Service(sp => SecuritySetup.KnownMigrations(sp.GetRequiredService<ClinicDbContext>()));
 }

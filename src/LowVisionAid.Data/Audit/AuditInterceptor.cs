@@ -7,8 +7,8 @@ using Microsoft.EntityFrameworkCore.Storage;
 namespace LowVisionAid.Data.Audit;
 
 /// <summary>
-/// Adds one audit line for every record created, changed or deleted through <see cref="ClinicDbContext"/>, in the
-/// same transaction as the change. The line names the table and the record number only, never its content.
+/// Adds one audit line for every clinic record (client, visit, plan, trial, kit device, settings) created, changed
+/// or deleted through <see cref="ClinicDbContext"/>, in the same transaction as the change. The line names the table and the record number only, never its content.
 /// </summary>
 public sealed class AuditInterceptor(IAuditActor actor, TimeProvider clock) : SaveChangesInterceptor
 {
@@ -70,7 +70,7 @@ public sealed class AuditInterceptor(IAuditActor actor, TimeProvider clock) : Sa
         var changes = new List<PendingChange>();
         foreach (var entry in context.ChangeTracker.Entries())
         {
-            if (entry.Metadata.IsOwned() || entry.State is not (EntityState.Added or EntityState.Modified or EntityState.Deleted))
+            if (!IsClinicRecord(entry) || entry.State is not (EntityState.Added or EntityState.Modified or EntityState.Deleted))
             {
                 continue;
             }
@@ -154,6 +154,11 @@ public sealed class AuditInterceptor(IAuditActor actor, TimeProvider clock) : Sa
             pending.OwnTransaction.Dispose();
         }
     }
+
+    // Clinic records only: not the audit lines themselves, and not Identity's rows (accounts are audited by the
+    // account pages, sign-ins by the sign-in page, so a changed failed-sign-in counter is no record change).
+    private static bool IsClinicRecord(EntityEntry entry) =>
+        !entry.Metadata.IsOwned() && entry.Metadata.ClrType.Namespace == typeof(Entities.Client).Namespace;
 
     private static long? KeyOf(EntityEntry entry)
     {

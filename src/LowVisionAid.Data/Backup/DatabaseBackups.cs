@@ -21,8 +21,11 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
     public const string FilePrefix = "lowvisionaid-";
     public const string FileExtension = ".db";
 
-    /// <summary>The migration history tables a LowVisionAid database has: the clinic's (required) and the access one.</summary>
-    public static IReadOnlyList<string> HistoryTables { get; } = ["__EFMigrationsHistory", Access.AccessDbContext.MigrationsHistoryTable];
+    /// <summary>
+    /// The migration history tables a LowVisionAid database may have: the one history (required), and the separate
+    /// access history of a backup made by the earlier two-context version (upgraded after restore).
+    /// </summary>
+    public static IReadOnlyList<string> HistoryTables { get; } = ["__EFMigrationsHistory", Access.AccessHistoryUpgrade.HistoryTable];
 
     public string DatabasePath { get; } = databasePath;
 
@@ -115,7 +118,7 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
                 return RestoreCheck.Refuse($"This backup was made by a newer version of LowVisionAid (its schema has {unknown.Count} change(s) this version does not know, such as {unknown[0]}). Restore it with that version or a newer one.");
             }
 
-            var missing = knownMigrations.Count(m => !applied.Contains(m));
+            var missing = knownMigrations.Count(m => !applied.Contains(m) && !Access.AccessHistoryUpgrade.EarlierMigrations.Contains(m));
             return new RestoreCheck(true, missing == 0
                 ? "The backup is intact and has the current schema."
                 : $"The backup is intact; its schema is older and will be upgraded ({missing} change(s)) after restore.", applied);

@@ -20,5 +20,14 @@ public sealed class Plan
 
     public required string OutputsJson { get; set; }
 
+    /// <summary>
+    /// The options the clinician chose for the handout (at most one per goal), apart from the outputs, which never
+    /// change. Empty until something is chosen.
+    /// </summary>
+    public PlanChoices Choices { get; set; } = PlanChoices.None;
+
+    /// <summary>When the choices last changed (the handout's "given on" date), or null before any choice.</summary>
+    public DateTime? ChosenUtc { get; set; }
+
     public List<Trial> Trials { get; } = [];
 }

@@ -47,6 +47,25 @@ public static class HyperlegibleFont
     public static byte[] GetFontBytes(bool bold, bool italic) =>
         [.. EmbeddedFontResolver.LoadFace(EmbeddedFontResolver.FaceName(bold, italic))];
 
+    /// <summary>
+    /// The file names of the four faces as a web page asks for them (e.g. <c>AtkinsonHyperlegible-Bold.ttf</c>),
+    /// each with its bold and italic flags for <see cref="GetFontBytes"/>.
+    /// </summary>
+    public static IReadOnlyDictionary<string, (bool Bold, bool Italic)> FaceFiles { get; } =
+        new[] { (false, false), (true, false), (false, true), (true, true) }
+            .ToDictionary(f => EmbeddedFontResolver.FaceName(f.Item1, f.Item2) + ".ttf", f => f, StringComparer.Ordinal);
+
+    /// <summary>The SIL Open Font License 1.1 text the faces are released under (Fonts/OFL.txt, embedded).</summary>
+    public static string LicenceText => Licence.Value;
+
+    private static readonly Lazy<string> Licence = new(() =>
+    {
+        using var stream = typeof(HyperlegibleFont).Assembly.GetManifestResourceStream("LowVisionAid.Reports.Fonts.OFL.txt")
+            ?? throw new InvalidOperationException("The font licence (Fonts/OFL.txt) is not embedded in LowVisionAid.Reports.");
+        using var reader = new StreamReader(stream);
+        return reader.ReadToEnd();
+    }, LazyThreadSafetyMode.ExecutionAndPublication);
+
     private static XHeightRatio ReadRatio()
     {
         var fraction = FontFile.XHeightFraction(GetFontBytes(bold: false, italic: false))

@@ -11,7 +11,7 @@ namespace LowVisionAid.Web.Demo;
 /// An invented clinic, so that a newcomer lands in a working app. Every person and figure here is made up;
 /// the records are marked as demo and Settings removes them.
 /// </summary>
-public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanHandler makePlan)
+public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanHandler makePlan, ChoosePlanOptionHandler choose)
 {
     public const string ClinicName = "Harbour Lane Low Vision Clinic (demo)";
 
@@ -57,9 +57,54 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
                 FollowUpDue = today.AddDays(7),
             });
             await db.SaveChangesAsync(ct).ConfigureAwait(false);
+            await ChooseForHandoutsAsync(planIds, ct).ConfigureAwait(false);
         }
 
         return true;
+    }
+
+    /// <summary>
+    /// The demo clinician's choices for the handouts: for the first client, the lit +12 D magnifier she has on loan
+    /// wherever her plan lists it (her medication labels); otherwise the first suitable kit device (or planner
+    /// option) of each goal. The third plan is left without a
+    /// choice, so the demo also shows what the handout says when nothing is chosen yet.
+    /// </summary>
+    private async Task ChooseForHandoutsAsync(List<int> planIds, CancellationToken ct)
+    {
+        for (var p = 0; p < planIds.Count; p++)
+        {
+            if (p == 2)
+            {
+                continue;
+            }
+
+            var outputs = await db.Plans.Where(x => x.Id == planIds[p]).Select(x => x.OutputsJson).SingleAsync(ct).ConfigureAwait(false);
+            var snapshot = PlanJson.Read<PlanSnapshot>(outputs);
+            for (var g = 0; g < snapshot.Goals.Count; g++)
+            {
+                if (DemoChoice(snapshot.Goals[g], g, preferKit: p == 0 ? "HM-12L" : null) is { } choice)
+                {
+                    await choose.ChooseAsync(planIds[p], choice, ct).ConfigureAwait(false);
+                }
+            }
+        }
+    }
+
+    private static PlanOptionRef? DemoChoice(GoalPlan goal, int g, string? preferKit)
+    {
+        var kit = goal.KitDevices.Select((o, i) => (o, i)).ToList();
+        if (preferKit is not null && kit.FindIndex(x => x.o.KitCode == preferKit) is var k and >= 0)
+        {
+            return new PlanOptionRef(g, PlanOptionList.KitDevices, k);
+        }
+
+        if (kit.FindIndex(x => x.o.Usable) is var usableKit and >= 0)
+        {
+            return new PlanOptionRef(g, PlanOptionList.KitDevices, usableKit);
+        }
+
+        var options = goal.Options.Select((o, i) => (o, i)).ToList();
+        return options.FindIndex(x => x.o.Usable) is var usable and >= 0 ? new PlanOptionRef(g, PlanOptionList.Options, usable) : null;
     }
 
     /// <summary>Removes every demo record and gives the clinic a neutral name until the user sets its own.</summary>

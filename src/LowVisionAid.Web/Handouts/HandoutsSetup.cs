@@ -1,6 +1,7 @@
 using System.Globalization;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Figures;
+using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Handouts;
 using LowVisionAid.Reports.Summaries;
 
@@ -21,5 +22,31 @@ internal static class HandoutsSetup
         builder.Services.AddScoped<StoredPlanReader>();
         builder.Services.AddScoped<PlanReports>();
         return builder;
+    }
+
+    /// <summary>
+    /// Serves the handout face to the browser at <c>/fonts/…</c> (the four TTFs and <c>OFL.txt</c>) from the
+    /// Reports assembly, so the repository keeps one copy of the fonts (src/LowVisionAid.Reports/Fonts) and the
+    /// print view and the figures use exactly the face the PDFs embed. Open to everyone, like the static files.
+    /// </summary>
+    public static WebApplication MapHandoutFonts(this WebApplication app)
+    {
+        ArgumentNullException.ThrowIfNull(app);
+        app.MapGet("/fonts/{file}", (string file, HttpContext http) =>
+        {
+            if (string.Equals(file, "OFL.txt", StringComparison.Ordinal))
+            {
+                return Results.Text(HyperlegibleFont.LicenceText, "text/plain", System.Text.Encoding.UTF8);
+            }
+
+            if (!HyperlegibleFont.FaceFiles.TryGetValue(file, out var face))
+            {
+                return Results.NotFound();
+            }
+
+            http.Response.Headers.CacheControl = "public, max-age=86400";
+            return Results.Bytes(HyperlegibleFont.GetFontBytes(face.Bold, face.Italic), "font/ttf");
+        }).AllowAnonymous().ExcludeFromDescription();
+        return app;
     }
 }

@@ -28,7 +28,7 @@ public sealed record PlanReportData(
     IReadOnlyList<string> PlanCautions,
     IReadOnlyList<TrialRecord> Trials)
 {
-    /// <summary>True when at least one option was chosen (a trial of it ended dispensed, loaned or ordered).</summary>
+    /// <summary>True when at least one option was chosen (on the plan page, or by a trial that ended dispensed, loaned or ordered).</summary>
     public bool HasChosenOption => Chosen.Count > 0;
 }
 
@@ -50,6 +50,7 @@ public sealed record PlanReportData(
 /// <param name="Figures">Every figure the plan stored for it, as shown on the plan page.</param>
 /// <param name="Reasons">The plan's reasons for its position.</param>
 /// <param name="Notes">The plan's notes on it (limits, fluency).</param>
+/// <param name="ChosenBy">How it came to be chosen.</param>
 public sealed record ReportOption(
     string Name,
     OptionKind Family,
@@ -67,4 +68,15 @@ public sealed record ReportOption(
     bool HasLightOrBattery,
     IReadOnlyList<OptionFigure> Figures,
     IReadOnlyList<string> Reasons,
-    IReadOnlyList<string> Notes);
+    IReadOnlyList<string> Notes,
+    ChosenBy ChosenBy = ChosenBy.Clinician);
+
+/// <summary>How an option came to be in the handout.</summary>
+public enum ChosenBy
+{
+    /// <summary>The clinician chose it for the handout on the plan page.</summary>
+    Clinician,
+
+    /// <summary>No choice was made for its goal, and a trial of it ended dispensed, loaned or ordered.</summary>
+    Trial,
+}

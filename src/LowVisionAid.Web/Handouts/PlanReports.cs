@@ -16,6 +16,10 @@ public sealed class PlanReports(
     IReportRenderer<ClinicianSummary> summaryRenderer,
     TradeOffFigures figures)
 {
+    /// <summary>What the plan page says when nothing is chosen yet.</summary>
+    public const string NothingChosenHelp =
+        "The handout and the trade-off figures need a chosen option: use \u201cChoose for the handout\u201d on one of the options above, or record a trial whose outcome is dispensed, loaned or ordered.";
+
     public Task<PlanReportData?> LoadAsync(int planId, CancellationToken ct) => reader.ReadAsync(planId, ct);
 
     public ReportResult RenderHandout(PlanReportData plan) => handoutRenderer.Render(Handout(plan));

@@ -15,9 +15,13 @@ namespace LowVisionAid.Web.Handouts;
 
 /// <summary>
 /// Reads a saved plan for the reports: its stored outputs (the figures exactly as the plan page shows them), its
-/// stored inputs, its trials, the client and the clinic settings. An option counts as chosen when a trial of it
-/// ended dispensed, loaned or ordered: that is the device the client takes home.
+/// stored inputs, its choices, its trials, the client and the clinic settings.
 /// </summary>
+/// <remarks>
+/// The chosen option of each goal: the one the clinician chose for the handout on the plan page, when there is one
+/// (the explicit choice always wins); otherwise the options of that goal whose trial ended dispensed, loaned or
+/// ordered (the device the client took home). Declined trials never count.
+/// </remarks>
 /// <remarks>
 /// Implementation note: the outputs are read as JSON by property name (Goals, Options, KitDevices, Figures …) and
 /// the stored figures are read back with the core's notation parsers, so the reports print what the plan page
@@ -60,30 +64,61 @@ public sealed class StoredPlanReader(ClinicDbContext db)
         var chosen = new List<ReportOption>();
         var cautions = new List<string>();
         var estimates = new List<MethodEstimate>();
-        foreach (var trial in trials.Where(t => t.Outcome is TrialOutcome.Dispensed or TrialOutcome.Loaned or TrialOutcome.Ordered))
+        var choosing = trials.Where(t => t.Outcome is TrialOutcome.Dispensed or TrialOutcome.Loaned or TrialOutcome.Ordered).ToList();
+        var byTrial = new List<(int Goal, JsonElement Option, Trial Trial)>();
+        foreach (var trial in choosing)
         {
+            // A trial counts for the first goal that lists its device.
             for (int g = 0; g < goals.Count; g++)
             {
                 var match = Options(goals[g]).FirstOrDefault(o => Matches(o, trial));
-                if (match.ValueKind == JsonValueKind.Undefined)
+                if (match.ValueKind != JsonValueKind.Undefined)
                 {
-                    continue;
+                    byTrial.Add((g, match, trial));
+                    break;
                 }
+            }
+        }
 
-                var option = Option(match, goals[g], g < inputGoals.Count ? inputGoals[g] : default, inputs.RootElement, trial);
-                if (option is not null && chosen.TrueForAll(c => c.Name != option.Name || c.Task != option.Task))
+        var fromTrials = false;
+        for (int g = 0; g < goals.Count; g++)
+        {
+            var inputGoal = g < inputGoals.Count ? inputGoals[g] : default;
+            var picked = new List<ReportOption?>();
+            if (plan.Choices.ForGoal(g) is { } choice)
+            {
+                var list = Array(goals[g], choice.List == PlanOptionList.KitDevices ? "KitDevices" : "Options");
+                if (choice.Index < list.Count)
+                {
+                    picked.Add(Option(list[choice.Index], goals[g], inputGoal, inputs.RootElement, null, ChosenBy.Clinician));
+                }
+            }
+            else
+            {
+                foreach (var (_, option, trial) in byTrial.Where(t => t.Goal == g))
+                {
+                    picked.Add(Option(option, goals[g], inputGoal, inputs.RootElement, trial, ChosenBy.Trial));
+                    fromTrials = true;
+                }
+            }
+
+            foreach (var option in picked.OfType<ReportOption>())
+            {
+                if (chosen.TrueForAll(c => c.Name != option.Name || c.Task != option.Task))
                 {
                     chosen.Add(option);
                     Collect(goals[g], cautions, estimates);
                 }
-
-                break;
             }
         }
 
         var followUp = trials.Where(t => t.FollowUpDue is not null && t.FollowUpDone is null).Select(t => t.FollowUpDue).Min();
-        var given = trials.Where(t => t.Outcome is TrialOutcome.Dispensed or TrialOutcome.Loaned or TrialOutcome.Ordered)
-            .Select(t => (DateOnly?)t.TrialDate).Max();
+        // Given on: the day of the latest decision that put a device in the handout.
+        var given = new[]
+        {
+            plan.Choices.IsEmpty || plan.ChosenUtc is not { } at ? null : (DateOnly?)DateOnly.FromDateTime(at),
+            fromTrials ? choosing.Select(t => (DateOnly?)t.TrialDate).Max() : null,
+        }.Max();
         return new PlanReportData(
             plan.Id,
             client.Code,
@@ -184,7 +219,7 @@ public sealed class StoredPlanReader(ClinicDbContext db)
         return kitCode is null && string.Equals(Text(option, "Kind"), trial.DeviceDescription.Trim(), StringComparison.OrdinalIgnoreCase);
     }
 
-    private static ReportOption? Option(JsonElement option, JsonElement goal, JsonElement inputGoal, JsonElement inputs, Trial trial)
+    private static ReportOption? Option(JsonElement option, JsonElement goal, JsonElement inputGoal, JsonElement inputs, Trial? trial, ChosenBy chosenBy)
     {
         var figures = Array(option, "Figures")
             .Select(f => new OptionFigure(Text(f, "Label") ?? "", Text(f, "Value") ?? ""))
@@ -203,8 +238,12 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             : PrintSizeNotation.Parse(Text(goal, "Target"), Invariant).TryGetValue(out var typed) ? typed : PrintSize.FromM(1.0);
         var kind = Text(option, "Kind") ?? "";
         var family = Family(kind) ?? OptionKind.LargePrint;
+        var kitCode = Text(option, "KitCode");
+        // The kit device as it was when the plan was made (in the stored inputs), else as the trial recorded it.
+        var kitPoint = kitCode is null ? default : Array(inputs, "Kit").FirstOrDefault(k => Text(k, "Code") == kitCode);
+        var lit = kitPoint.ValueKind == JsonValueKind.Object && kitPoint.TryGetProperty("Illuminated", out var flag) && flag.ValueKind == JsonValueKind.True;
         return new ReportOption(
-            Text(option, "KitName") ?? trial.KitDevice?.Name ?? kind,
+            Text(option, "KitName") ?? trial?.KitDevice?.Name ?? kind,
             family,
             kind,
             Text(goal, "Title") ?? "",
@@ -217,10 +256,11 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             StoredDistance(Figure("Eye to lens")),
             StoredDistance(Figure("Field on the page")),
             int.TryParse(Figure("Letters in view"), NumberStyles.Integer, Invariant, out var letters) ? letters : null,
-            family == OptionKind.VideoMagnifier || trial.KitDevice?.Illuminated == true,
+            family == OptionKind.VideoMagnifier || lit || trial?.KitDevice?.Illuminated == true,
             figures,
             [.. Array(option, "Reasons").Select(r => Text(r, "Text")).OfType<string>()],
-            [.. Array(option, "Notes").Where(n => n.ValueKind == JsonValueKind.String).Select(n => n.GetString()!)]);
+            [.. Array(option, "Notes").Where(n => n.ValueKind == JsonValueKind.String).Select(n => n.GetString()!)],
+            chosenBy);
     }
 
     private static void Collect(JsonElement goal, List<string> cautions, List<MethodEstimate> estimates)

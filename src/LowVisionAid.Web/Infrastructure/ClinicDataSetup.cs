@@ -32,7 +32,7 @@ internal static class ClinicDataSetup
     {
         await using var scope = app.Services.CreateAsyncScope();
         var db = scope.ServiceProvider.GetRequiredService<ClinicDbContext>();
-        await db.Database.MigrateAsync().ConfigureAwait(false);
+        await db.UpgradeAsync().ConfigureAwait(false);
         if (app.Configuration.GetValue(LoadDemoKey, defaultValue: true))
         {
             await scope.ServiceProvider.GetRequiredService<DemoClinic>().LoadIntoEmptyDatabaseAsync(CancellationToken.None).ConfigureAwait(false);

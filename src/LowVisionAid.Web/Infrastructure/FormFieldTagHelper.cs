@@ -1,3 +1,4 @@
+using System.Globalization;
 using Microsoft.AspNetCore.Mvc.ModelBinding;
 using Microsoft.AspNetCore.Mvc.Rendering;
 using Microsoft.AspNetCore.Mvc.ViewFeatures;
@@ -152,17 +153,43 @@ public sealed class FormFieldTagHelper(IHtmlGenerator generator) : TagHelper
         }
 
         attributes["spellcheck"] = "false";
-        return generator.GenerateTextBox(ViewContext, For.ModelExplorer, For.Name, value: null, format: null, attributes);
+
+        // The model's value must be passed: GenerateTextBox does not read it from the model explorer, so without it
+        // every text box rendered value="" on a GET (posted-back values come from model state and still win).
+        return generator.GenerateTextBox(ViewContext, For.ModelExplorer, For.Name, ValueText(For.Model), format: null, attributes);
     }
+
+    /// <summary>
+    /// The value as the control expects it: a date input takes only year-month-day (anything else shows as empty),
+    /// so dates are written invariantly; other values are shown as they are held.
+    /// </summary>
+    internal static string? ValueText(object? model) => model switch
+    {
+        null => null,
+        DateOnly date => date.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture),
+        DateTime dateTime => dateTime.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture),
+        IFormattable formattable => formattable.ToString(null, CultureInfo.InvariantCulture),
+        _ => model.ToString(),
+    };
 }
 
 /// <summary>
-/// The summary of errors at the top of a form (<c>role="alert"</c>), each linking to its field. Renders nothing
-/// when the form has no errors.
+/// The one summary of problems at the top of every form: a heading, then a list of every error in model state,
+/// each linking to its field (ids follow the tag helpers' rule, Input.Goals[0].Detail → Input_Goals_0__Detail);
+/// an error without a field (e.g. a conflict with another person's change) is listed without a link. It is an
+/// alert, and it takes the focus when the page loads (<c>autofocus</c>, and wwwroot/js/site.js where a browser
+/// ignores autofocus on a non-control), so a screen reader announces it and the keyboard starts from it.
+/// Renders nothing when the form has no errors.
+/// <code>&lt;error-summary note="Nothing was calculated. What you typed is kept below." /&gt;</code>
 /// </summary>
 [HtmlTargetElement("error-summary", TagStructure = TagStructure.WithoutEndTag)]
 public sealed class ErrorSummaryTagHelper(IHtmlGenerator generator) : TagHelper
 {
+    private const string Id = "error-summary";
+
+    /// <summary>An optional sentence under the list, e.g. what was not saved.</summary>
+    public string? Note { get; set; }
+
     [ViewContext]
     [HtmlAttributeNotBound]
     public ViewContext ViewContext { get; set; } = null!;
@@ -171,7 +198,7 @@ public sealed class ErrorSummaryTagHelper(IHtmlGenerator generator) : TagHelper
     {
         ArgumentNullException.ThrowIfNull(output);
         var failures = ViewContext.ViewData.ModelState
-            .Where(kv => kv.Value is { ValidationState: ModelValidationState.Invalid })
+            .Where(kv => kv.Value is { Errors.Count: > 0 })
             .SelectMany(kv => kv.Value!.Errors.Select(e => (Key: kv.Key, e.ErrorMessage)))
             .ToList();
         if (failures.Count == 0)
@@ -183,12 +210,14 @@ public sealed class ErrorSummaryTagHelper(IHtmlGenerator generator) : TagHelper
         output.TagName = "div";
         output.TagMode = TagMode.StartTagAndEndTag;
         output.Attributes.SetAttribute("class", "error-summary");
+        output.Attributes.SetAttribute("id", Id);
         output.Attributes.SetAttribute("role", "alert");
-        output.Attributes.SetAttribute("aria-labelledby", "error-summary-title");
+        output.Attributes.SetAttribute("aria-labelledby", Id + "-title");
         output.Attributes.SetAttribute("tabindex", "-1");
+        output.Attributes.Add(new TagHelperAttribute("autofocus", null, HtmlAttributeValueStyle.Minimized));
 
         var title = new TagBuilder("h2");
-        title.Attributes["id"] = "error-summary-title";
+        title.Attributes["id"] = Id + "-title";
         title.InnerHtml.Append(failures.Count == 1 ? "There is 1 problem to fix" : $"There are {failures.Count} problems to fix");
         output.Content.AppendHtml(title);
 
@@ -196,7 +225,7 @@ public sealed class ErrorSummaryTagHelper(IHtmlGenerator generator) : TagHelper
         foreach (var (key, message) in failures)
         {
             var item = new TagBuilder("li");
-            if (key.Contains('.', StringComparison.Ordinal))
+            if (key.Length > 0)
             {
                 var link = new TagBuilder("a");
                 link.Attributes["href"] = "#" + TagBuilder.CreateSanitizedId(key, generator.IdAttributeDotReplacement);
@@ -212,5 +241,11 @@ public sealed class ErrorSummaryTagHelper(IHtmlGenerator generator) : TagHelper
         }
 
         output.Content.AppendHtml(list);
+        if (!string.IsNullOrEmpty(Note))
+        {
+            var note = new TagBuilder("p");
+            note.InnerHtml.Append(Note);
+            output.Content.AppendHtml(note);
+        }
     }
 }

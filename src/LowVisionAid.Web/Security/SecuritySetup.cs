@@ -42,9 +42,6 @@ internal static class SecuritySetup
         services.AddSingleton<IAuditActor, HttpAuditActor>();
         services.AddSingleton<AuditInterceptor>();
         services.ConfigureDbContext<ClinicDbContext>((sp, options) => options.AddInterceptors(sp.GetRequiredService<AuditInterceptor>()));
-        services.AddDbContext<AccessDbContext>((sp, options) => options.UseSqlite(
-            ClinicConnectionString(sp),
-            sqlite => sqlite.MigrationsAssembly(ClinicDatabase.MigrationsAssembly).MigrationsHistoryTable(AccessDbContext.MigrationsHistoryTable)));
         services.AddScoped<AuditTrail>();
         services.AddScoped(sp =>
         {
@@ -69,7 +66,7 @@ internal static class SecuritySetup
                 o.Lockout.AllowedForNewUsers = true;
                 o.User.RequireUniqueEmail = false;
             })
-            .AddEntityFrameworkStores<AccessDbContext>();
+            .AddEntityFrameworkStores<ClinicDbContext>();
         services.ConfigureApplicationCookie(o =>
         {
             o.Cookie.Name = "LowVisionAid.SignIn";
@@ -143,31 +140,35 @@ internal static class SecuritySetup
     }
 
     /// <summary>
-    /// Before any migration: a backup of an existing database when either context has a migration to apply. Then the
-    /// access schema (users, roles, audit) is brought up to date and the three roles exist. Runs before the clinic
-    /// database is migrated.
+    /// Before any migration: a backup of an existing database that has a migration to apply (or still has the earlier
+    /// separate access history). Then the schema is upgraded (<see cref="ClinicDatabase.UpgradeAsync"/>) and the three
+    /// roles exist. Runs before the demo clinic is loaded.
     /// </summary>
     public static async Task PrepareAccessDatabaseAsync(this WebApplication app)
     {
-        await using var scope = app.Services.CreateAsyncScope();
+        ArgumentNullException.ThrowIfNull(app);
+        await PrepareDatabaseAsync(app.Services).ConfigureAwait(false);
+    }
+
+    /// <inheritdoc cref="PrepareAccessDatabaseAsync"/>
+    public static async Task PrepareDatabaseAsync(IServiceProvider root)
+    {
+        await using var scope = root.CreateAsyncScope();
         var services = scope.ServiceProvider;
         var clinic = services.GetRequiredService<ClinicDbContext>();
-        var access = services.GetRequiredService<AccessDbContext>();
         var backups = services.GetRequiredService<DatabaseBackups>();
         BackupFile? taken = null;
         if (File.Exists(backups.DatabasePath) && new FileInfo(backups.DatabasePath).Length > 0)
         {
-            var hasSchema = (await clinic.Database.GetAppliedMigrationsAsync().ConfigureAwait(false)).Any()
-                || (await access.Database.GetAppliedMigrationsAsync().ConfigureAwait(false)).Any();
-            var pending = (await clinic.Database.GetPendingMigrationsAsync().ConfigureAwait(false)).Any()
-                || (await access.Database.GetPendingMigrationsAsync().ConfigureAwait(false)).Any();
+            var hasSchema = (await clinic.Database.GetAppliedMigrationsAsync().ConfigureAwait(false)).Any();
+            var pending = (await clinic.Database.GetPendingMigrationsAsync().ConfigureAwait(false)).Any();
             if (hasSchema && pending)
             {
                 taken = backups.Create("before-migration");
             }
         }
 
-        await access.Database.MigrateAsync().ConfigureAwait(false);
+        await clinic.UpgradeAsync().ConfigureAwait(false);
         await EnsureRolesAsync(services.GetRequiredService<RoleManager<IdentityRole>>()).ConfigureAwait(false);
         if (taken is not null)
         {
@@ -175,13 +176,8 @@ internal static class SecuritySetup
         }
     }
 
-    /// <summary>Every migration this build knows, of both contexts (what a restored backup may contain).</summary>
-    public static IReadOnlySet<string> KnownMigrations(ClinicDbContext clinic, AccessDbContext access)
-    {
-        ArgumentNullException.ThrowIfNull(clinic);
-        ArgumentNullException.ThrowIfNull(access);
-        return clinic.Database.GetMigrations().Concat(access.Database.GetMigrations()).ToHashSet(StringComparer.Ordinal);
-    }
+    /// <summary>Every migration a restored backup may record (this build's, and the earlier separate access history's).</summary>
+    public static IReadOnlySet<string> KnownMigrations(ClinicDbContext clinic) => clinic.KnownMigrations();
 
     public static async Task EnsureRolesAsync(RoleManager<IdentityRole> roles)
     {

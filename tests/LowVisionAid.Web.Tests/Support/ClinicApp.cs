@@ -1,6 +1,7 @@
 using LowVisionAid.Data;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
+using Microsoft.AspNetCore.TestHost;
 using Microsoft.Data.Sqlite;
 using Microsoft.Extensions.DependencyInjection;
 
@@ -8,9 +9,10 @@ namespace LowVisionAid.Web.Tests.Support;
 
 /// <summary>
 /// The app over its own SQLite file in a fresh temporary folder, migrated at start as in production.
-/// The demo clinic is off unless a test asks for it, so each test sees only the records it makes.
+/// The demo clinic is off unless a test asks for it, so each test sees only the records it makes. A test that
+/// depends on today's date passes its own clock.
 /// </summary>
-public sealed class ClinicApp(bool loadDemo = false) : WebApplicationFactory<Program>
+public sealed class ClinicApp(bool loadDemo = false, TimeProvider? clock = null) : WebApplicationFactory<Program>
 {
     public string DataFolder { get; } = Path.Combine(Path.GetTempPath(), "lowvisionaid-tests", Guid.NewGuid().ToString("N"));
 
@@ -19,6 +21,10 @@ public sealed class ClinicApp(bool loadDemo = false) : WebApplicationFactory<Pro
         builder.UseSetting("DataFolder", DataFolder);
         builder.UseSetting("LoadDemoClinic", loadDemo ? "true" : "false");
         builder.UseEnvironment("Production");
+        if (clock is not null)
+        {
+            builder.ConfigureTestServices(services => services.AddSingleton(clock));
+        }
     }
 
     /// <summary>A client that keeps cookies (for antiforgery) and does not follow redirects.</summary>

@@ -1,4 +1,4 @@
-using LowVisionAid.Data.Access;
+using LowVisionAid.Data;
 using LowVisionAid.Data.Audit;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
@@ -6,7 +6,7 @@ using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Pages.Admin;
 
-public sealed class AuditModel(AccessDbContext db) : PageModel
+public sealed class AuditModel(ClinicDbContext db) : PageModel
 {
     public const int PageSize = 500;
 

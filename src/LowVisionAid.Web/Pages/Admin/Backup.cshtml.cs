@@ -1,5 +1,4 @@
 using LowVisionAid.Data;
-using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Backup;
 using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Mvc;
@@ -9,7 +8,7 @@ namespace LowVisionAid.Web.Pages.Admin;
 
 [RequestSizeLimit(MaxUploadBytes)]
 [RequestFormLimits(MultipartBodyLengthLimit = MaxUploadBytes)]
-public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic, AccessDbContext access) : PageModel
+public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic) : PageModel
 {
     public const long MaxUploadBytes = 1L << 30;
 
@@ -96,7 +95,7 @@ public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic,
         return Page();
     }
 
-    public IReadOnlySet<string> Known => SecuritySetup.KnownMigrations(clinic, access);
+    public IReadOnlySet<string> Known => SecuritySetup.KnownMigrations(clinic);
 
     private void Report(RestoreCheck result, string success)
     {

@@ -24,18 +24,17 @@ public sealed class TakeBackupHandler(DatabaseBackups backups, AuditTrail audit)
 /// it is older, and records the restore in the restored audit trail.
 /// </summary>
 public sealed class RestoreBackupHandler(
-    DatabaseBackups backups, ClinicDbContext clinic, AccessDbContext access, RoleManager<IdentityRole> roles, AuditTrail audit)
+    DatabaseBackups backups, ClinicDbContext clinic, RoleManager<IdentityRole> roles, AuditTrail audit)
 {
     public async Task<RestoreCheck> HandleAsync(string candidatePath, string shownName, CancellationToken ct)
     {
-        var check = backups.Restore(candidatePath, SecuritySetup.KnownMigrations(clinic, access));
+        var check = backups.Restore(candidatePath, SecuritySetup.KnownMigrations(clinic));
         if (!check.CanRestore)
         {
             return check;
         }
 
-        await access.Database.MigrateAsync(ct).ConfigureAwait(false);
-        await clinic.Database.MigrateAsync(ct).ConfigureAwait(false);
+        await clinic.UpgradeAsync(ct).ConfigureAwait(false);
         await SecuritySetup.EnsureRolesAsync(roles).ConfigureAwait(false);
         await audit.RecordAsync(AuditAction.Restored, "Database", null, shownName, ct).ConfigureAwait(false);
         return check;

@@ -20,8 +20,11 @@ public sealed class NewAccountHandler(UserManager<IdentityUser> users, RoleManag
 {
     public const int MaxUserName = 60;
 
-    /// <summary>Returns the messages to show beside the fields (field name → message); empty when the account was made.</summary>
-    public async Task<IReadOnlyList<KeyValuePair<string, string>>> HandleAsync(NewAccountInput input, CancellationToken ct)
+    /// <summary>
+    /// Returns the messages to show beside the fields (field name → message); empty when the account was made.
+    /// <paramref name="actor"/> names who made it in the audit trail when that is not the signed-in user (a command).
+    /// </summary>
+    public async Task<IReadOnlyList<KeyValuePair<string, string>>> HandleAsync(NewAccountInput input, CancellationToken ct, string? actor = null)
     {
         ArgumentNullException.ThrowIfNull(input);
         var errors = new List<KeyValuePair<string, string>>();
@@ -57,7 +60,7 @@ public sealed class NewAccountHandler(UserManager<IdentityUser> users, RoleManag
         }
 
         await users.AddToRoleAsync(user, input.Role).ConfigureAwait(false);
-        await audit.RecordAsync(AuditAction.Created, "User", null, "Account " + name + " with role " + input.Role, ct).ConfigureAwait(false);
+        await audit.RecordAsync(AuditAction.Created, "User", null, "Account " + name + " with role " + input.Role, ct, actor).ConfigureAwait(false);
         return [];
     }
 }

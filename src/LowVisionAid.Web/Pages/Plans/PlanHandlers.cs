@@ -111,18 +111,83 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
         };
 }
 
+/// <summary>
+/// Records which option the clinician chose for the handout, one per goal, beside the plan's outputs (which stay
+/// exactly as they were made). The audit trail gets its "Plan changed" line from the save, like every other write.
+/// </summary>
+public sealed class ChoosePlanOptionHandler(ClinicDbContext db, TimeProvider clock)
+{
+    public const string NoSuchOption = "That option is not in this plan. Reload the plan page and choose again.";
+
+    /// <summary>Found is false when there is no such plan; Problem says why the choice was refused, or is null.</summary>
+    public async Task<(bool Found, string? Problem)> ChooseAsync(int planId, PlanOptionRef option, CancellationToken ct)
+    {
+        var plan = await db.Plans.FirstOrDefaultAsync(p => p.Id == planId, ct).ConfigureAwait(false);
+        if (plan is null)
+        {
+            return (false, null);
+        }
+
+        if (!Exists(PlanJson.Read<PlanSnapshot>(plan.OutputsJson), option))
+        {
+            return (true, NoSuchOption);
+        }
+
+        if (!plan.Choices.Contains(option))
+        {
+            plan.Choices = plan.Choices.With(option);
+            plan.ChosenUtc = clock.GetUtcNow().UtcDateTime;
+            await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        }
+
+        return (true, null);
+    }
+
+    /// <summary>Clears the choice for one goal; false when there is no such plan.</summary>
+    public async Task<bool> ClearAsync(int planId, int goal, CancellationToken ct)
+    {
+        var plan = await db.Plans.FirstOrDefaultAsync(p => p.Id == planId, ct).ConfigureAwait(false);
+        if (plan is null)
+        {
+            return false;
+        }
+
+        if (plan.Choices.ForGoal(goal) is not null)
+        {
+            plan.Choices = plan.Choices.Without(goal);
+            plan.ChosenUtc = clock.GetUtcNow().UtcDateTime;
+            await db.SaveChangesAsync(ct).ConfigureAwait(false);
+        }
+
+        return true;
+    }
+
+    public static bool Exists(PlanSnapshot snapshot, PlanOptionRef option)
+    {
+        ArgumentNullException.ThrowIfNull(snapshot);
+        if (option.Goal < 0 || option.Goal >= snapshot.Goals.Count || option.Index < 0)
+        {
+            return false;
+        }
+
+        var goal = snapshot.Goals[option.Goal];
+        var list = option.List == PlanOptionList.KitDevices ? goal.KitDevices : goal.Options;
+        return option.Index < list.Count;
+    }
+}
+
 public sealed record PlanTrialRow(int Id, DateOnly Date, string Device, string Outcome, string FollowUp, string? Result, string? Comment);
 
 public sealed record PlanView(
     int Id, int VisitId, DateOnly VisitDate, int ClientId, string ClientCode, bool IsDemo, DateTime CreatedUtc,
-    PlanSnapshot Snapshot, IReadOnlyList<PlanTrialRow> Trials);
+    PlanSnapshot Snapshot, IReadOnlyList<PlanTrialRow> Trials, PlanChoices Choices);
 
 public sealed class PlanDetailsHandler(ClinicDbContext db)
 {
     public async Task<PlanView?> HandleAsync(int id, CancellationToken ct)
     {
         var plan = await db.Plans.AsNoTracking().Where(p => p.Id == id)
-            .Select(p => new { p.Id, p.VisitId, p.Visit!.VisitDate, p.Visit.ClientId, p.Visit.Client!.Code, p.Visit.Client.IsDemo, p.CreatedUtc, p.OutputsJson })
+            .Select(p => new { p.Id, p.VisitId, p.Visit!.VisitDate, p.Visit.ClientId, p.Visit.Client!.Code, p.Visit.Client.IsDemo, p.CreatedUtc, p.OutputsJson, p.Choices })
             .FirstOrDefaultAsync(ct).ConfigureAwait(false);
         if (plan is null)
         {
@@ -133,6 +198,7 @@ public sealed class PlanDetailsHandler(ClinicDbContext db)
             .ToListAsync(ct).ConfigureAwait(false);
         return new PlanView(plan.Id, plan.VisitId, plan.VisitDate, plan.ClientId, plan.Code, plan.IsDemo, plan.CreatedUtc,
             PlanJson.Read<PlanSnapshot>(plan.OutputsJson),
-            [.. trials.Select(t => new PlanTrialRow(t.Id, t.TrialDate, t.DeviceDescription, Labels.Outcome(t.Outcome), Labels.FollowUp(t.FollowUpDue, t.FollowUpDone), t.ResultText, t.ClientComment))]);
+            [.. trials.Select(t => new PlanTrialRow(t.Id, t.TrialDate, t.DeviceDescription, Labels.Outcome(t.Outcome), Labels.FollowUp(t.FollowUpDue, t.FollowUpDone), t.ResultText, t.ClientComment))],
+            plan.Choices);
     }
 }

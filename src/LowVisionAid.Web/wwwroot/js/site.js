@@ -1,12 +1,30 @@
 // Progressive enhancement only: every page works without this file.
-// When a form comes back with problems, move the keyboard focus to the list of problems, so that a screen reader
-// announces it and a keyboard user starts from it.
+// When a form comes back with problems, move the keyboard focus to the list of problems (the error-summary tag
+// helper, Infrastructure/FormFieldTagHelper.cs), so that a screen reader announces it and a keyboard user starts
+// from it. The summary also carries autofocus, which covers a browser running without this file.
+// Following a link in the summary puts the focus in the field itself (a plain link to #id only scrolls to it) and
+// brings the field's label into view with it.
 document.addEventListener("DOMContentLoaded", function () {
     var summary = document.querySelector(".error-summary");
-    if (summary) {
-        if (!summary.hasAttribute("tabindex")) {
-            summary.setAttribute("tabindex", "-1");
-        }
+    if (!summary) {
+        return;
+    }
+    if (!summary.hasAttribute("tabindex")) {
+        summary.setAttribute("tabindex", "-1");
+    }
+    if (document.activeElement !== summary) {
         summary.focus();
     }
+    summary.addEventListener("click", function (event) {
+        var link = event.target.closest("a[href^='#']");
+        var field = link && document.getElementById(decodeURIComponent(link.getAttribute("href").slice(1)));
+        if (!field) {
+            return;
+        }
+        event.preventDefault();
+        var label = document.querySelector("label[for='" + field.id + "']");
+        var group = field.closest("fieldset");
+        (group || label || field).scrollIntoView();
+        field.focus({ preventScroll: true });
+    });
 });

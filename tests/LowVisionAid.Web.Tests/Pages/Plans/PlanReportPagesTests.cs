@@ -15,11 +15,15 @@ using PigDocument = UglyToad.PdfPig.PdfDocument;
 namespace LowVisionAid.Web.Tests.Pages.Plans;
 
 /// <summary>
-/// The handout, the summary and the print view of a saved plan, read back from what the app serves.
-/// The stored plan holds the figures a +8 D hand magnifier gives, worked out from the cited formulas (derived):
-/// working distance 1/F = 12.5 cm with the page at the focal point (methods.md §3.1); field y = D/(z·F) with
-/// D = 75 mm and z = 25 cm + 1.5 cm to the entrance pupil, 0.075/(0.265 × 8) = 35.4 mm (§4.1), stored as the plan
-/// page shows it, "3.5 cm"; letters of 1M print in view 35.4/(1.1 × 1.4544) = 22 (§4.2, k = 1.1 from memory).
+/// The handout, the summary and the print view of a plan made as the app makes it: the visit typed into the visit
+/// form, the plan made by the visit page's plan handler, the option chosen with the plan page's own form, and the
+/// files read back from what the app serves. The visit asks for +8 D: distance 6/24 gives +4 D by Kestenbaum's rule
+/// (CV-06, exact), +8 D with the 2:1 fluent reserve (derived as CV-07); 1.6M read at 40 cm for a 1M target at 2:1
+/// gives an equivalent viewing distance of 0.40 × 1/(1.6 × 2) = 12.5 cm, +8 D (derived as CV-08). The kit's +8 D,
+/// 75 mm hand magnifier then gives, by the cited formulas (derived): working distance 1/F = 12.5 cm with the page
+/// at the focal point (methods.md §3.1); with the eye 25 cm from the lens (the planner's default), field
+/// y = D/(z·F) = 0.075/(0.265 × 8) = 35.4 mm with z = 25 + 1.5 cm to the entrance pupil (§4.1, ±1 %), shown as
+/// "3.5 cm"; letters of 1M in view 35.4/(1.1 × 1.4544) = 22.1, so 22 (§4.2, k = 1.1 from memory).
 /// </summary>
 public sealed partial class PlanReportPagesTests
 {
@@ -29,8 +33,9 @@ public sealed partial class PlanReportPagesTests
     public async Task The_handout_pdf_names_the_device_its_distances_every_caution_and_the_clinic_contact()
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "H-1", TrialOutcome.Dispensed);
         using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "H-1");
+        await TrialAsync(app, browser, planId, "Loaned");
 
         var response = await browser.GetAsync(new Uri($"/Plans/{planId}/Handout", UriKind.Relative));
 
@@ -56,8 +61,8 @@ public sealed partial class PlanReportPagesTests
     public async Task The_handout_body_is_set_in_the_embedded_hyperlegible_face_at_18_pt_or_more_on_one_to_six_pages()
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "H-2", TrialOutcome.Loaned);
         using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "H-2");
 
         var pdf = Read(await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/Handout", UriKind.Relative)));
 
@@ -73,8 +78,9 @@ public sealed partial class PlanReportPagesTests
     public async Task The_summary_pdf_holds_the_inputs_the_estimates_every_figure_the_trials_and_the_method_version()
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "S-1", TrialOutcome.Dispensed);
         using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "S-1");
+        await TrialAsync(app, browser, planId, "Dispensed");
 
         var response = await browser.GetAsync(new Uri($"/Plans/{planId}/Summary", UriKind.Relative));
 
@@ -100,8 +106,9 @@ public sealed partial class PlanReportPagesTests
     public async Task A_plan_without_a_chosen_option_explains_that_on_screen_instead_of_giving_a_pdf(string page)
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "N-1", TrialOutcome.Declined);
         using var browser = app.Browser();
+        var planId = await MadePlanAsync(app, browser, "N-1");
+        await TrialAsync(app, browser, planId, "Declined");
 
         var response = await browser.GetAsync(new Uri($"/Plans/{planId}/{page}", UriKind.Relative));
 
@@ -129,8 +136,8 @@ public sealed partial class PlanReportPagesTests
     public async Task A_handout_regenerated_from_the_stored_plan_has_identical_text()
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "R-1", TrialOutcome.Ordered);
         using var first = app.Browser();
+        var planId = await ChosenPlanAsync(app, first, "R-1");
         var before = Read(await first.GetByteArrayAsync(new Uri($"/Plans/{planId}/Handout", UriKind.Relative)));
 
         // A later request, from another client, after the app has served other pages.
@@ -146,8 +153,8 @@ public sealed partial class PlanReportPagesTests
     public async Task The_client_print_view_shows_the_handout_wording_and_the_check_line_at_the_target_size()
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "P-1", TrialOutcome.Dispensed);
         using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "P-1");
 
         var html = WebUtility.HtmlDecode(await browser.GetStringAsync(new Uri($"/Plans/{planId}/Print?for=client", UriKind.Relative)));
 
@@ -164,14 +171,18 @@ public sealed partial class PlanReportPagesTests
         Assert.Equal(ClientHandoutRenderer.PointsFor(Optics.Quantities.PrintSize.FromM(1.0)), double.Parse(size.Groups[1].Value, CultureInfo.InvariantCulture), 3);
         Assert.Equal(8.31, double.Parse(size.Groups[1].Value, CultureInfo.InvariantCulture), 2);
         Assert.DoesNotContain("style=", html, StringComparison.Ordinal);
+        // Every word of the line is drawn at that size, in order (one SVG per word, so the line wraps on a phone).
+        var words = CheckWords().Matches(html).Select(m => m.Groups[2].Value).ToList();
+        Assert.Equal(HandoutWording.TargetSizeLine.Split(' '), words);
+        Assert.All(CheckWords().Matches(html), m => Assert.Equal(size.Groups[1].Value, m.Groups[1].Value));
     }
 
     [Fact]
     public async Task The_clinician_print_view_shows_the_figures_with_their_tables_and_the_letters_the_plan_counted()
     {
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "P-2", TrialOutcome.Dispensed);
         using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "P-2");
 
         var html = await browser.GetStringAsync(new Uri($"/Plans/{planId}/Print?for=clinician", UriKind.Relative));
 
@@ -201,8 +212,8 @@ public sealed partial class PlanReportPagesTests
             .Select(d => Path.Combine(d, "pdftoppm")).FirstOrDefault(File.Exists);
         Assert.True(pdftoppm is not null, "pdftoppm (Debian poppler-utils) is missing; scripts/test.sh installs it.");
         using var app = new ClinicApp();
-        var planId = await StoredPlanAsync(app, "A-1", TrialOutcome.Dispensed);
         using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "A-1");
         var folder = ArtefactFolder();
 
         foreach (var kind in new[] { "Handout", "Summary" })
@@ -219,97 +230,76 @@ public sealed partial class PlanReportPagesTests
     }
 
     /// <summary>
-    /// A client, a visit and a plan stored as the plan page stores it (inputs and outputs as JSON), with one trial
-    /// of the kit's +8 D hand magnifier that ended with <paramref name="outcome"/> and a follow-up booked.
+    /// The clinic settings and kit (set up directly, as a clinic would have them), then a client, a visit typed into
+    /// the visit form and a plan made by the visit page's plan handler. Returns the plan's id.
     /// </summary>
-    private static Task<int> StoredPlanAsync(ClinicApp app, string code, TrialOutcome outcome) =>
-        app.WithDbAsync(async db =>
+    internal static async Task<int> MadePlanAsync(ClinicApp app, HttpClient browser, string code)
+    {
+        await app.WithDbAsync(async db =>
         {
             var settings = Demo.DemoClinic.DefaultSettings("Harbour Test Clinic (invented)", hasDemoData: false);
             settings.ClinicContact = ClinicLine;
             settings.HandoutPrintSize = Optics.Quantities.PrintSize.FromM(1.5);   // 12.5 pt, so the body stays at the 18 pt floor
             db.Settings.Add(settings);
-            var kit = new KitDevice { Code = "HM-08", Name = "Hand magnifier +8 D, 75 mm", Kind = Optics.Kit.DeviceKind.HandMagnifier, Power = Optics.Quantities.Power.FromDioptres(8), Aperture = Optics.Quantities.Distance.FromMillimetres(75) };
-            db.KitDevices.Add(kit);
-            var client = new Client { Code = code };
-            var visit = new Visit { VisitDate = new DateOnly(2026, 11, 20), Practitioner = "A. Example (invented)" };
-            var plan = new Plan { MethodVersion = "2026.12.1", InputsJson = Inputs, OutputsJson = Outputs, CreatedUtc = new DateTime(2026, 11, 20, 10, 0, 0, DateTimeKind.Utc) };
-            plan.Trials.Add(new Trial
-            {
-                TrialDate = new DateOnly(2026, 11, 20),
-                KitDevice = kit,
-                DeviceDescription = "Hand magnifier +8 D, 75 mm (HM-08)",
-                Task = GoalTask.Mail,
-                ResultText = "1M",
-                ClientComment = "Reads the bills now",
-                Outcome = outcome,
-                FollowUpDue = new DateOnly(2026, 12, 18),
-            });
-            visit.Plans.Add(plan);
-            client.Visits.Add(visit);
-            db.Clients.Add(client);
+            db.KitDevices.Add(new KitDevice { Code = "HM-08", Name = "Hand magnifier +8 D, 75 mm", Kind = Optics.Kit.DeviceKind.HandMagnifier, Power = Optics.Quantities.Power.FromDioptres(8), Aperture = Optics.Quantities.Distance.FromMillimetres(75) });
             await db.SaveChangesAsync();
-            return plan.Id;
         });
+        var clientId = await app.ClientAsync(code);
+        var visit = Records.VisitForm();
+        visit["Input.DistanceBoth"] = "6/24";
+        visit["Input.NearThreshold"] = "1.6M";
+        visit["Input.Goals[0].Task"] = "Mail";
+        visit["Input.Goals[0].Detail"] = "bills";
+        visit.Remove("Input.ReadingSpeeds[0].PrintSize");
+        visit.Remove("Input.ReadingSpeeds[0].WordsPerMinute");
+        var created = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", visit);
+        Assert.Equal(HttpStatusCode.Redirect, created.StatusCode);
+        var visitUrl = created.Headers.Location!.OriginalString;
+        var made = await browser.SubmitAsync(visitUrl, new Dictionary<string, string>(), visitUrl + "?handler=Plan");
+        Assert.Equal(HttpStatusCode.Redirect, made.StatusCode);
+        return int.Parse(made.Headers.Location!.OriginalString.Split('/')[^1], CultureInfo.InvariantCulture);
+    }
 
-    private static readonly string Inputs = JsonSerializer.Serialize(new
+    /// <summary>A made plan with the kit's +8 D hand magnifier chosen for the handout on the plan page.</summary>
+    private static async Task<int> ChosenPlanAsync(ClinicApp app, HttpClient browser, string code)
     {
-        VisitId = 1,
-        DistanceLogMar = 1.0,
-        NearThresholdM = 4.0,
-        NearTestDistanceMetres = 0.4,
-        WorkingDistanceMetres = 0.25,
-        UsefulEyes = 2,
-        HandsFree = false,
-        Tremor = false,
-        SpotReserve = 1.0,
-        FluentReserve = 2.0,
-        SustainedReserve = 3.0,
-        CharacterPitch = 1.1,
-        Imperial = false,
-        Goals = new[] { new { Task = "Mail", Detail = "bills", TargetText = "1M", TargetM = 1.0 } },
-    });
+        var planId = await MadePlanAsync(app, browser, code);
+        var chosen = await PressAsync(browser, planId, "(HM-08)", "Choose");
+        Assert.Equal(HttpStatusCode.Redirect, chosen.StatusCode);
+        return planId;
+    }
 
-    private static readonly string Outputs = JsonSerializer.Serialize(new
+    /// <summary>
+    /// Presses the choice button (handler Choose or Clear) of the option card whose heading contains
+    /// <paramref name="heading"/>, posting that card's own form as the browser would.
+    /// </summary>
+    internal static async Task<HttpResponseMessage> PressAsync(HttpClient browser, int planId, string heading, string handler)
     {
-        MethodVersion = "2026.12.1",
-        Goals = new[]
+        var html = await browser.GetStringAsync(new Uri($"/Plans/{planId}", UriKind.Relative));
+        var card = Cards().Matches(html).Select(m => m.Value).FirstOrDefault(c => WebUtility.HtmlDecode(c).Contains(heading, StringComparison.Ordinal));
+        Assert.True(card is not null, $"no option card for {heading}");
+        var action = FormAction().Match(card!);
+        Assert.True(action.Success, "the card's choice form");
+        Assert.Contains("handler=" + handler, WebUtility.HtmlDecode(action.Groups[1].Value), StringComparison.Ordinal);
+        return await browser.PostFormAsync(WebUtility.HtmlDecode(action.Groups[1].Value), card!, new Dictionary<string, string>());
+    }
+
+    /// <summary>Records a trial with the trial form, as the plan page's trial link does.</summary>
+    private static async Task TrialAsync(ClinicApp app, HttpClient browser, int planId, string outcome)
+    {
+        var kitId = await app.WithDbAsync(db => db.KitDevices.Where(k => k.Code == "HM-08").Select(k => k.Id).SingleAsync());
+        var response = await browser.SubmitAsync($"/Trials/New?planId={planId}", new Dictionary<string, string>
         {
-            new
-            {
-                Title = "Letters and bills (bills)",
-                Target = "1M",
-                Task = "Sustained reading",
-                RequiredPower = "+8.00 D",
-                Estimates = new[] { new { Method = "Kestenbaum's rule with reserve", EquivalentPower = "+8.00 D", ViewingDistance = "12.5 cm", Magnification = "2.0× (re 25 cm)", Reserve = "2:1", LogUnits = "0.90" } },
-                MethodsDisagree = false,
-                Options = Array.Empty<object>(),
-                KitDevices = new[]
-                {
-                    new
-                    {
-                        Position = 1,
-                        Kind = "Hand magnifier",
-                        KitCode = "HM-08",
-                        KitName = "Hand magnifier +8 D, 75 mm",
-                        Usable = true,
-                        Notes = Array.Empty<string>(),
-                        Figures = new[]
-                        {
-                            new { Label = "Power needed", Value = "+8.00 D" },
-                            new { Label = "Power given", Value = "+8.00 D (enough)" },
-                            new { Label = "Working distance", Value = "12.5 cm" },
-                            new { Label = "Eye to lens", Value = "25 cm" },
-                            new { Label = "Field on the page", Value = "3.5 cm" },
-                            new { Label = "Letters in view", Value = "22" },
-                        },
-                        Reasons = new[] { new { Text = "Gives the required magnification.", InFavour = true } },
-                    },
-                },
-                Cautions = new[] { new { Id = "sunlight-fire", Text = "A magnifying lens left in sunlight can focus it and start a fire." } },
-            },
-        },
-    });
+            ["Input.TrialDate"] = "2026-11-20",
+            ["Input.KitDeviceId"] = kitId.ToString(CultureInfo.InvariantCulture),
+            ["Input.Task"] = "Mail",
+            ["Input.Result"] = "1M",
+            ["Input.ClientComment"] = "Reads the bills now",
+            ["Input.Outcome"] = outcome,
+            ["Input.FollowUpDue"] = "2026-12-18",
+        });
+        Assert.Equal(HttpStatusCode.Redirect, response.StatusCode);
+    }
 
     private static string ArtefactFolder()
     {
@@ -324,9 +314,9 @@ public sealed partial class PlanReportPagesTests
         return path;
     }
 
-    private sealed record PdfRead(string Text, IReadOnlyList<Letter> Letters, int Pages);
+    internal sealed record PdfRead(string Text, IReadOnlyList<Letter> Letters, int Pages);
 
-    private static PdfRead Read(byte[] pdf)
+    internal static PdfRead Read(byte[] pdf)
     {
         using var document = PigDocument.Open(pdf);
         var words = new List<string>();
@@ -354,6 +344,15 @@ public sealed partial class PlanReportPagesTests
     [GeneratedRegex(@"\s+")]
     private static partial Regex Spaces();
 
-    [GeneratedRegex("<text [^>]*font-size=\"([0-9.]+)\"[^>]*>" + "Can you read")]
+    [GeneratedRegex("<svg class=\"check-word\"[^>]*><text [^>]*font-size=\"([0-9.]+)\"[^>]*>([^<]*)</text>")]
+    private static partial Regex CheckWords();
+
+    [GeneratedRegex("<article class=\"option\".*?</article>", RegexOptions.Singleline)]
+    private static partial Regex Cards();
+
+    [GeneratedRegex("<form [^>]*action=\"([^\"]*)\"")]
+    private static partial Regex FormAction();
+
+    [GeneratedRegex("<text [^>]*font-size=\"([0-9.]+)\"[^>]*>" + "Can<")]
     private static partial Regex FontSize();
 }

@@ -157,6 +157,73 @@ public class VisitPagesTests
         Assert.Equal("Second editor", await app.WithDbAsync(db => db.Visits.Select(v => v.Practitioner).SingleAsync()));
     }
 
+    [Fact]
+    public async Task The_new_visit_form_offers_todays_date_in_the_form_a_date_field_accepts()
+    {
+        // Arrange: a clock stopped on 1 June 2026 (UTC).
+        using var app = new ClinicApp(clock: new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero)));
+        var clientId = await app.ClientAsync("V-8");
+        using var browser = app.Browser();
+
+        // Act
+        var html = await browser.GetStringAsync(new Uri($"/Visits/New?clientId={clientId}", UriKind.Relative));
+
+        // Assert: a date input shows (and submits) only year-month-day; anything else renders as an empty field.
+        var date = FormHtml.Input(html, "Input_VisitDate");
+        Assert.Contains("type=\"date\"", date, StringComparison.Ordinal);
+        Assert.Equal("2026-06-01", FormHtml.Value(date));
+    }
+
+    [Fact]
+    public async Task The_edit_form_opens_with_the_saved_date_and_readings_filled_in()
+    {
+        // Arrange
+        using var app = new ClinicApp(clock: new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero)));
+        var clientId = await app.ClientAsync("V-9");
+        using var browser = app.Browser();
+        var created = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", Records.VisitForm("2026-05-20"));
+        Assert.Equal(HttpStatusCode.Redirect, created.StatusCode);
+
+        // Act
+        var html = await browser.GetStringAsync(new Uri(created.Headers.Location!.OriginalString + "/Edit", UriKind.Relative));
+
+        // Assert: every text field shows what was saved, so saving the form unchanged keeps the visit as it was.
+        Assert.Equal("2026-05-20", FormHtml.Value(FormHtml.Input(html, "Input_VisitDate")));
+        Assert.Equal("Test practitioner", FormHtml.Value(FormHtml.Input(html, "Input_Practitioner")));
+        Assert.Equal("6/60", FormHtml.Value(FormHtml.Input(html, "Input_DistanceRight")));
+        Assert.Equal("20/400", FormHtml.Value(FormHtml.Input(html, "Input_DistanceLeft")));
+        Assert.Equal("0.1 decimal", FormHtml.Value(FormHtml.Input(html, "Input_DistanceBoth")));
+        Assert.Equal("4M", FormHtml.Value(FormHtml.Input(html, "Input_NearThreshold")));
+        Assert.Equal("40 cm", FormHtml.Value(FormHtml.Input(html, "Input_NearTestDistance")));
+        Assert.Equal("25 cm", FormHtml.Value(FormHtml.Input(html, "Input_WorkingDistance")));
+        Assert.Equal("1M", FormHtml.Value(FormHtml.Input(html, "Input_Goals_0__TargetPrint")));
+        Assert.Equal("90", FormHtml.Value(FormHtml.Input(html, "Input_ReadingSpeeds_0__WordsPerMinute")));
+    }
+
+    [Fact]
+    public async Task Saving_the_edit_form_unchanged_keeps_every_reading()
+    {
+        // Arrange: open the edit form and post back only what it rendered, as a browser does when nothing is typed.
+        using var app = new ClinicApp(clock: new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero)));
+        var clientId = await app.ClientAsync("V-10");
+        using var browser = app.Browser();
+        var created = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", Records.VisitForm("2026-05-20"));
+        var editUrl = created.Headers.Location!.OriginalString + "/Edit";
+        var html = await browser.GetStringAsync(new Uri(editUrl, UriKind.Relative));
+        var rendered = FormHtml.TextValues(html);
+
+        // Act
+        var saved = await browser.PostFormAsync(editUrl, html, rendered);
+
+        // Assert
+        Assert.Equal(HttpStatusCode.Redirect, saved.StatusCode);
+        var visit = await app.WithDbAsync(db => db.Visits.Include(v => v.Goals).SingleAsync());
+        Assert.Equal(new DateOnly(2026, 5, 20), visit.VisitDate);
+        Assert.Equal("6/60", visit.DistanceRightText);
+        Assert.Equal("4M", visit.NearThresholdText);
+        Assert.Equal("1M", Assert.Single(visit.Goals).TargetText);
+    }
+
     [Theory]
     [InlineData("/Visits/9999")]
     [InlineData("/Visits/9999/Edit")]

@@ -3,10 +3,14 @@ using Microsoft.EntityFrameworkCore.Migrations;
 
 #nullable disable
 
-namespace LowVisionAid.Migrations.Access
+namespace LowVisionAid.Migrations.Migrations
 {
-    /// <inheritdoc />
-    public partial class InitialAccess : Migration
+    /// <summary>
+    /// Sign-in (the Identity tables) and the audit trail join the one context. A database from the two-context version
+    /// already has exactly these tables, recorded in its separate access history: <c>AccessHistoryUpgrade</c> records
+    /// this migration as applied there instead of running it. Keep it to these tables only.
+    /// </summary>
+    public partial class AccessInClinicContext : Migration
     {
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
