@@ -8,7 +8,9 @@ public static partial class FormFields
 {
     public static List<KeyValuePair<string, string>> Read(string html, Func<string, bool>? formFilter = null)
     {
-        var form = FormPattern().Matches(html).FirstOrDefault(m => formFilter?.Invoke(m.Groups[1].Value) ?? true)
+        // The page's own form posts back to the page (no action); with sign-in on, the layout's sign-out form comes first.
+        var matching = FormPattern().Matches(html).Where(m => formFilter?.Invoke(m.Groups[1].Value) ?? true).ToList();
+        var form = matching.FirstOrDefault(m => Html.Attribute(m.Groups[1].Value, "action") is null) ?? matching.FirstOrDefault()
             ?? throw new InvalidOperationException("No matching form on the page.");
         var body = form.Groups[2].Value;
         var fields = new List<KeyValuePair<string, string>>();
