@@ -32,24 +32,32 @@ internal sealed partial class StartUpLock : IAsyncDisposable
     private StartUpLock(FileStream file) => _file = file;
 
     /// <summary>Takes the start-up lock of the clinic database, then removes a migration lock left by a killed start.</summary>
-    public static async Task<StartUpLock> TakeAsync(WebApplication app)
+    public static Task<StartUpLock> TakeAsync(WebApplication app)
     {
         ArgumentNullException.ThrowIfNull(app);
+        return TakeAsync(app.Services, app.Logger, app.Lifetime.ApplicationStopping);
+    }
+
+    /// <summary>The same, for a command that upgrades the database without starting the server (create-admin).</summary>
+    public static async Task<StartUpLock> TakeAsync(IServiceProvider services, ILogger logger, CancellationToken ct)
+    {
+        ArgumentNullException.ThrowIfNull(services);
+        ArgumentNullException.ThrowIfNull(logger);
         string connectionString;
-        await using (var scope = app.Services.CreateAsyncScope())
+        await using (var scope = services.CreateAsyncScope())
         {
             connectionString = scope.ServiceProvider.GetRequiredService<ClinicDbContext>().Database.GetConnectionString()
                 ?? throw new InvalidOperationException("The clinic database has no connection string.");
         }
 
         var databasePath = Path.GetFullPath(new SqliteConnectionStringBuilder(connectionString).DataSource);
-        var file = await OpenExclusiveAsync(databasePath + LockFileSuffix, app.Lifetime.ApplicationStopping).ConfigureAwait(false);
+        var file = await OpenExclusiveAsync(databasePath + LockFileSuffix, ct).ConfigureAwait(false);
         try
         {
             var released = await RemoveAbandonedMigrationLockAsync(databasePath).ConfigureAwait(false);
             if (released > 0)
             {
-                LogReleased(app.Logger);
+                LogReleased(logger);
             }
 
             return new StartUpLock(file);

@@ -1,5 +1,6 @@
 using System.Text;
 using LowVisionAid.Data.Access;
+using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Web.Pages.Admin;
 using Microsoft.AspNetCore.Identity;
 
@@ -79,7 +80,12 @@ internal static class CreateAdminCommand
             return Usage;
         }
 
-        await SecuritySetup.PrepareDatabaseAsync(root).ConfigureAwait(false);
+        var logger = root.GetRequiredService<ILoggerFactory>().CreateLogger(typeof(CreateAdminCommand));
+        await using (await StartUpLock.TakeAsync(root, logger, ct).ConfigureAwait(false))   // as at start: frees a migration lock a killed start left
+        {
+            await SecuritySetup.PrepareDatabaseAsync(root).ConfigureAwait(false);
+        }
+
         await using var scope = root.CreateAsyncScope();
         var users = scope.ServiceProvider.GetRequiredService<UserManager<IdentityUser>>();
         if (await users.FindByNameAsync(name).ConfigureAwait(false) is not null)

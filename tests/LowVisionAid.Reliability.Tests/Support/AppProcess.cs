@@ -76,7 +76,15 @@ public sealed class AppProcess : IDisposable
         process.BeginErrorReadLine();
         if (waitUntilReady)
         {
-            await app.WaitUntilReadyAsync(timeout);
+            try
+            {
+                await app.WaitUntilReadyAsync(timeout);
+            }
+            catch
+            {
+                app.Dispose();   // a start that never answered is killed, not left running after the test
+                throw;
+            }
         }
 
         return app;
@@ -120,7 +128,7 @@ public sealed class AppProcess : IDisposable
         var seen = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
         lock (_lastLines)
         {
-            if (_lastLines.Any(l => l.Contains(text, StringComparison.Ordinal)))
+            if (HasWritten(text))
             {
                 return true;
             }
@@ -129,6 +137,15 @@ public sealed class AppProcess : IDisposable
         }
 
         return await Task.WhenAny(seen.Task, Task.Delay(timeout)) == seen.Task;
+    }
+
+    /// <summary>Whether the app has written a line containing <paramref name="text"/> (among its last lines kept).</summary>
+    public bool HasWritten(string text)
+    {
+        lock (_lastLines)
+        {
+            return _lastLines.Any(l => l.Contains(text, StringComparison.Ordinal));
+        }
     }
 
     /// <summary>The app's last lines on its console (standard output and error), oldest first.</summary>
