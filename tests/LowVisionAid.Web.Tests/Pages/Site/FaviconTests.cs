@@ -22,4 +22,17 @@ public sealed class FaviconTests
         Assert.StartsWith("<svg xmlns=\"http://www.w3.org/2000/svg\"", svg, StringComparison.Ordinal);
         Assert.Contains("viewBox=\"0 0 32 32\"", svg, StringComparison.Ordinal);
     }
+
+    [Theory]
+    [InlineData("/Plans/1/Print?for=client")]
+    [InlineData("/Plans/1/Print?for=clinician")]
+    public async Task The_print_views_without_the_layout_link_the_icon_too(string path)
+    {
+        using var app = new ClinicApp(loadDemo: true);
+        using var browser = app.Browser();
+
+        var page = await browser.GetStringAsync(new Uri(path, UriKind.Relative));
+
+        Assert.Contains("<link rel=\"icon\" href=\"/favicon.svg\" type=\"image/svg+xml\" />", page, StringComparison.Ordinal);
+    }
 }
