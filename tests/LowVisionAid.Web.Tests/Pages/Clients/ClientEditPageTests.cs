@@ -1,5 +1,6 @@
 using System.Net;
 using System.Text.Encodings.Web;
+using LowVisionAid.Data;
 using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Entities;
@@ -63,7 +64,7 @@ public class ClientEditPageTests
         Assert.Contains("<dd>1942</dd>", page, StringComparison.Ordinal);
 
         await using var scope = app.Services.CreateAsyncScope();
-        var audit = await scope.ServiceProvider.GetRequiredService<AccessDbContext>().AuditEntries.AsNoTracking()
+        var audit = await scope.ServiceProvider.GetRequiredService<ClinicDbContext>().AuditEntries.AsNoTracking()
             .Where(a => a.RecordType == nameof(Client) && a.RecordId == id).ToListAsync();
         var changed = Assert.Single(audit, a => a.Action == AuditAction.Changed);
         Assert.Equal(AuditActors.LocalUser, changed.Actor);
