@@ -35,7 +35,7 @@ public sealed partial class QuickCalculatorFiguresTests
         Assert.Equal(HttpStatusCode.OK, response.StatusCode);
         var html = await response.Content.ReadAsStringAsync();
         Assert.Equal(3, SvgFigure().Count(html));
-        Assert.Equal(3, Regex.Count(html, "<table class=\"trade-off-table\">"));
+        Assert.Equal(3, Regex.Count(html, "<table class=\"trade-off-table[ \"]"));
         Assert.Contains("id=\"calculator-power\"", html, StringComparison.Ordinal);
         Assert.Contains("id=\"calculator-window\"", html, StringComparison.Ordinal);
         Assert.Contains("id=\"calculator-ladder\"", html, StringComparison.Ordinal);
