@@ -2,6 +2,7 @@ using LowVisionAid.Data;
 using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Backup;
+using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Identity;
 using Microsoft.EntityFrameworkCore;
@@ -24,7 +25,8 @@ public sealed class TakeBackupHandler(DatabaseBackups backups, AuditTrail audit)
 /// it is older, and records the restore in the restored audit trail.
 /// </summary>
 public sealed class RestoreBackupHandler(
-    DatabaseBackups backups, ClinicDbContext clinic, RoleManager<IdentityRole> roles, AuditTrail audit)
+    DatabaseBackups backups, ClinicDbContext clinic, RoleManager<IdentityRole> roles, AuditTrail audit,
+    IServiceProvider services, ILogger<RestoreBackupHandler> logger)
 {
     public async Task<RestoreCheck> HandleAsync(string candidatePath, string shownName, CancellationToken ct)
     {
@@ -34,7 +36,12 @@ public sealed class RestoreBackupHandler(
             return check;
         }
 
-        await clinic.UpgradeAsync(ct).ConfigureAwait(false);
+        // As at start: no second start migrates this file meanwhile, and a lock row a killed start left is freed.
+        await using (await StartUpLock.TakeAsync(services, logger, ct).ConfigureAwait(false))
+        {
+            await clinic.UpgradeAsync(ct).ConfigureAwait(false);
+        }
+
         await SecuritySetup.EnsureRolesAsync(roles).ConfigureAwait(false);
         await audit.RecordAsync(AuditAction.Restored, "Database", null, shownName, ct).ConfigureAwait(false);
         return check;
