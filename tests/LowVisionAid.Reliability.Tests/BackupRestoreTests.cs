@@ -111,9 +111,9 @@ public sealed class BackupRestoreTests
         await File.WriteAllTextAsync(text, "this is not a database at all, just some text in a file with a .db name");
         var before = DatabaseDump.Read(app.Data.DatabasePath);
 
-        var newerCheck = backups.Restore(newer.Path, Known(app));
-        var otherCheck = backups.Restore(other, Known(app));
-        var textCheck = backups.Restore(text, Known(app));
+        var newerCheck = await backups.RestoreAsync(newer.Path, Known(app), CancellationToken.None);
+        var otherCheck = await backups.RestoreAsync(other, Known(app), CancellationToken.None);
+        var textCheck = await backups.RestoreAsync(text, Known(app), CancellationToken.None);
 
         Assert.False(newerCheck.CanRestore);
         Assert.Contains("newer version", newerCheck.Message, StringComparison.Ordinal);

@@ -21,8 +21,9 @@ public sealed class TakeBackupHandler(DatabaseBackups backups, AuditTrail audit)
 }
 
 /// <summary>
-/// Restores a checked backup over the live database (after a "before-restore" backup of it), upgrades its schema if
-/// it is older, and records the restore in the restored audit trail.
+/// Restores a checked backup over the live database (after a "before-restore" backup of it; an older schema is
+/// upgraded in a working copy first, so this upgrade finds nothing left to do), and records the restore in the
+/// restored audit trail.
 /// </summary>
 public sealed class RestoreBackupHandler(
     DatabaseBackups backups, ClinicDbContext clinic, RoleManager<IdentityRole> roles, AuditTrail audit,
@@ -30,7 +31,7 @@ public sealed class RestoreBackupHandler(
 {
     public async Task<RestoreCheck> HandleAsync(string candidatePath, string shownName, CancellationToken ct)
     {
-        var check = backups.Restore(candidatePath, SecuritySetup.KnownMigrations(clinic));
+        var check = await backups.RestoreAsync(candidatePath, SecuritySetup.KnownMigrations(clinic), ct).ConfigureAwait(false);
         if (!check.CanRestore)
         {
             return check;
