@@ -79,6 +79,7 @@ internal static class SecuritySetup
             o.ExpireTimeSpan = TimeSpan.FromHours(8);
             o.SlidingExpiration = true;
         });
+        services.AddSessionChecks();   // sign-out, a password change or a disabled account ends every session (SessionChecks)
         services.AddAntiforgery(o =>
         {
             o.Cookie.Name = "LowVisionAid.Form";
