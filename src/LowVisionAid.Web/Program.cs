@@ -15,6 +15,12 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
     builder.WebHost.UseUrls("http://127.0.0.1:5080");
 }
 
+// A network address without Access:AllowLan: one message on standard error and a non-zero exit, no stack trace.
+if (StartRefusal.Check(builder.Configuration, Console.Error) is { } refused)
+{
+    return refused;
+}
+
 builder.AddClinicData();                    // SQLite file in the data folder, migrations from LowVisionAid.Migrations
 builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
 builder.Services.AddRazorPages();
