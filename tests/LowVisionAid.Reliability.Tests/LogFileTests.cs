@@ -19,7 +19,7 @@ public sealed partial class LogFileTests
 {
     // "A handful": the app's start, migration and demo lines, the host's four, and the framework's rare warnings
     // (a migration step EF cannot wrap in a transaction, a new cookie key). Before this log was configured, a first
-    // start wrote 168 entries, 144 of them SQL (docs/reliability.md).
+    // start wrote 159 entries, 144 of them SQL; now 9 (docs/reliability.md, "Logs").
     private const int HandfulOfLines = 12;
 
     private const string RequestCategory = "LowVisionAid.Web.Requests: ";
