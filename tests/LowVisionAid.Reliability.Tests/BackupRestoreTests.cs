@@ -3,7 +3,6 @@ using LowVisionAid.Data;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Backup;
 using LowVisionAid.Reliability.Tests.Support;
-using LowVisionAid.Web.Security;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
@@ -171,5 +170,5 @@ public sealed class BackupRestoreTests
     }
 
     private static IReadOnlySet<string> Known(ClinicApp app) =>
-        app.Service(sp => SecuritySetup.KnownMigrations(sp.GetRequiredService<ClinicDbContext>()));
+        app.Service(sp => sp.GetRequiredService<ClinicDbContext>().KnownMigrations());
 }

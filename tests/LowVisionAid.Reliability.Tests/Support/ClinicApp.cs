@@ -52,7 +52,13 @@ public sealed class ClinicApp : WebApplicationFactory<Program>
             builder.UseSetting(key, value);
         }
 
-        // Only the capture sees every line (Debug and up); the console stays quiet so the runs stay fast.
+        // Only the capture sees every line (Debug and up, above the app's appsettings.json levels; the privacy pin on
+        // the framework's request lines still holds); the console stays quiet so the runs stay fast.
+        foreach (var category in new[] { "Default", "LowVisionAid", "Microsoft.AspNetCore", "Microsoft.EntityFrameworkCore" })
+        {
+            builder.UseSetting("Logging:LogLevel:" + category, "Debug");
+        }
+
         builder.ConfigureLogging(logging =>
         {
             logging.ClearProviders();

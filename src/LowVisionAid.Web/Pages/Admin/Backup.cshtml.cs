@@ -99,7 +99,7 @@ public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic)
         return Page();
     }
 
-    public IReadOnlySet<string> Known => SecuritySetup.KnownMigrations(clinic);
+    public IReadOnlySet<string> Known => clinic.KnownMigrations();
 
     private void Report(RestoreCheck result, string success)
     {

@@ -72,7 +72,7 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             return null;
         }
 
-        var settings = await db.Settings.AsNoTracking().FirstOrDefaultAsync(ct).ConfigureAwait(false)
+        var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false)
             ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
         var kit = await db.KitDevices.AsNoTracking().OrderBy(k => k.Code).ToListAsync(ct).ConfigureAwait(false);
         return new PlanInputs
