@@ -19,7 +19,7 @@ namespace LowVisionAid.Reliability.Tests;
 public sealed partial class CalculationApiBadInputTests(ITestOutputHelper output)
 {
     /// <summary>CsCheck's iteration count: CsCheck_Iter, which scripts/test.sh sets to 10,000; CsCheck's default (100) otherwise.</summary>
-    public static int InputsPerEndpoint => Check.Iter;
+    public static long InputsPerEndpoint => Check.Iter;
 
     private static readonly string[] Fields = ["distanceAcuity", "nearAcuity", "targetPrint", "workingDistance", "reserve", "task", "goalDistanceAcuity", "age"];
     private static readonly string[] Flags = ["handsFree", "tremor", "oneUsefulEye"];

@@ -9,7 +9,7 @@ namespace LowVisionAid.Optics.Tests.Notation;
 public class NotationPropertyTests
 {
     // CsCheck_Iter (10,000 in the full run, scripts/test.sh); CsCheck's default of 100 in the fast loop.
-    private static int Many => Check.Iter;
+    private static long Many => Check.Iter;
 
     private static readonly CultureInfo[] Cultures =
     [

@@ -9,7 +9,7 @@ namespace LowVisionAid.Optics.Tests.Requirement;
 public class RequiredPowerPropertyTests
 {
     // CsCheck_Iter (10,000 in the full run, scripts/test.sh); CsCheck's default of 100 in the fast loop.
-    private static int Many => Check.Iter;
+    private static long Many => Check.Iter;
 
     private static readonly Gen<double> ThresholdM = Gen.Double[0.4, 20.0];
     private static readonly Gen<double> TargetM = Gen.Double[0.4, 10.0];
