@@ -5,6 +5,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 export DOTNET_CLI_TELEMETRY_OPTOUT=1 DOTNET_NOLOGO=1 DOTNET_SKIP_FIRST_TIME_EXPERIENCE=1
+export CsCheck_Iter="${CsCheck_Iter:-10000}"   # full-size property and fuzz runs (CsCheck's default is 100: the fast loop)
 
 results=test-artifacts/results
 rm -rf "$results"

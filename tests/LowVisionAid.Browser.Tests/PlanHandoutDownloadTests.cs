@@ -17,7 +17,7 @@ namespace LowVisionAid.Browser.Tests;
 /// </summary>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     private const string LitMagnifier = "Lit hand magnifier +12 D, 60 mm";
     private const string DemoPhone = "000 0000 0000 (invented)";
