@@ -18,7 +18,7 @@ namespace LowVisionAid.Reliability.Tests;
 public sealed class BadInputTests(ITestOutputHelper output)
 {
     /// <summary>CsCheck's iteration count: CsCheck_Iter, which scripts/test.sh sets to 10,000; CsCheck's default (100) otherwise.</summary>
-    public static long InputsPerTarget => Check.Iter;
+    public static long InputsPerTarget => CsCheck.Check.Iter;
 
     private static readonly IFormatProvider[] Cultures = [CultureInfo.InvariantCulture, CultureInfo.GetCultureInfo("fr-FR"), CultureInfo.GetCultureInfo("ar-SA")];
 
