@@ -204,7 +204,9 @@ public sealed record ReserveDecision(AcuityReserve Reserve, ReserveLevel? Level,
         };
         var basis = Level switch
         {
-            ReserveLevel.Spot => "a short spot task can be done at threshold, so the threshold acuity is used with no reserve and the critical print size (a fluent-reading measure) is not used (common practice; methods §2.3).",
+            ReserveLevel.Spot => Task == ReadingTask.SpotReading
+                ? "a short spot task can be done at threshold, so the threshold acuity is used with no reserve and the critical print size (a fluent-reading measure) is not used (common practice; methods §2.3)."
+                : "print at the threshold size suits only short spot tasks; for fluent reading 2:1 is usual (common practice; methods §2.3).",
             ReserveLevel.Fluent => "2:1 gives fluent reading for most readers (Cheong, Lovie-Kitchin and Bowers 2002; Latham and Tabrett 2012); choose 3:1 for long or high-speed reading (Whittaker and Lovie-Kitchin 1993).",
             ReserveLevel.Sustained => "3:1 suits long or high-speed reading (Whittaker and Lovie-Kitchin 1993).",
             _ => Task == ReadingTask.SpotReading
