@@ -15,10 +15,21 @@ public sealed record PlanSettings
     public double CharacterPitch { get; init; } = 1.1;
 
     /// <summary>
-    /// Total dioptric blur tolerance ΔF for depth of field (not ±). Default 0.59 D, the total subjective depth of focus
-    /// for a 4 mm pupil (Atchison, Charman and Woods 1997); low-vision readers often tolerate more.
+    /// Total dioptric blur tolerance ΔF for depth of field (not ±), as set by the clinician. Default 0.59 D, the total
+    /// subjective depth of focus of a normal eye with a 4 mm pupil (Atchison, Charman and Woods 1997). While
+    /// <see cref="BlurToleranceFollowsAcuity"/> is true the planner uses <see cref="DepthOfFieldRule.BlurToleranceFor"/>
+    /// the client's distance acuity instead, since tolerance grows as acuity falls (Legge, Mullen, Woo and Campbell 1987).
     /// </summary>
-    public Power BlurTolerance { get; init; } = Power.FromDioptres(0.59);
+    public Power BlurTolerance { get; init; } = Power.FromDioptres(DepthOfFieldRule.NormalEyeDioptres);
+
+    /// <summary>
+    /// True (the default) to take the blur tolerance from the client's distance acuity
+    /// (<see cref="DepthOfFieldRule"/>); false to use <see cref="BlurTolerance"/> as set.
+    /// </summary>
+    public bool BlurToleranceFollowsAcuity { get; init; } = true;
+
+    /// <summary>The ratio of each acuity-reserve level. Default spot 1:1, fluent 2:1, sustained 3:1 (methods §2.3).</summary>
+    public ReserveRatios Reserves { get; init; } = ReserveRatios.Default;
 
     /// <summary>
     /// The fraction of the required equivalent power an option must deliver to count as meeting it.

@@ -16,9 +16,9 @@ public static class PlanBuilder
     {
         ArgumentNullException.ThrowIfNull(inputs);
         var assumptions = new List<string>();
-        if (inputs.Goals.Any(g => PlanInputs.TaskFor(g.Task) == ReadingTask.DistanceViewing))
+        foreach (var task in inputs.Goals.Where(g => g.ViewingDistanceMetres is null && TaskRules.For(g.Task).Kind == ReadingTask.DistanceViewing).Select(g => g.Task).Distinct())
         {
-            assumptions.Add($"Television and faces are planned at {Length(Distance.FromMetres(PlanInputs.AssumedDistanceViewingMetres), inputs.Imperial)}, an assumed viewing distance; measure the client's own.");
+            assumptions.Add($"{Labels.Task(task)} is planned at {Length(TaskRules.For(task).Example, inputs.Imperial)}, an assumed viewing distance; measure the client's own.");
         }
 
         if (inputs.ReadingSpeeds.Count > 0)
@@ -37,7 +37,7 @@ public static class PlanBuilder
         var problems = Planner.Check(request);
         if (!problems.IsEmpty)
         {
-            return new GoalPlan(title, goal.TargetText, taskLabel, problems, null, null, [], false, [], null, [], [], [], []);
+            return new GoalPlan(title, goal.TargetText, taskLabel, problems, null, null, [], false, [], null, [], [], [], []) { ReferenceEstimates = [], PossibleReasons = [] };
         }
 
         var result = Planner.Build(request);
@@ -56,7 +56,13 @@ public static class PlanBuilder
             [.. result.Options.Select(o => Option(o, kitNames, inputs.Imperial))],
             [.. result.KitDevices.Select(o => Option(o, kitNames, inputs.Imperial))],
             [.. result.NotConsidered.Select(n => $"{KindLabel(n.Kind)}: {n.Reason}")],
-            [.. result.Cautions.Select(x => new CautionRow(x.Id, x.Text))]);
+            [.. result.Cautions.Select(x => new CautionRow(x.Id, x.Text))])
+        {
+            Reserve = result.Reserve?.Reserve.ToString(null, Invariant),
+            ReserveWhy = result.Reserve?.FormatWhy(Invariant),
+            ReferenceEstimates = result.Estimates is { } r ? [.. r.ForReference.Select(x => Estimate(x, inputs.Imperial))] : [],
+            PossibleReasons = result.Estimates?.FormatPossibleReasons(Invariant) ?? [],
+        };
     }
 
     private static EstimateRow Estimate(PowerEstimate e, bool imperial) => new(
@@ -72,7 +78,7 @@ public static class PlanBuilder
         MethodLabel(d.Lower.Method),
         MethodLabel(d.Higher.Method),
         $"{d.DifferenceLogUnits.ToString("0.00", Invariant)} log units ({d.PowerRatio.ToString("0.0#", Invariant)} times the power)",
-        d.PossibleReasons);
+        []);
 
     private static OptionRow Option(RankedOption ranked, Dictionary<string, string> kitNames, bool imperial)
     {

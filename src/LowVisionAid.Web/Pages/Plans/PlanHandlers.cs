@@ -43,7 +43,7 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             return new(null, NoGoals);
         }
 
-        if (inputs.WorkingDistanceMetres <= 0 && inputs.Goals.Any(g => PlanInputs.TaskFor(g.Task) != ReadingTask.DistanceViewing))
+        if (inputs.WorkingDistanceMetres <= 0 && inputs.Goals.Any(g => TaskRules.For(g.Task).Kind != ReadingTask.DistanceViewing))
         {
             return new(null, NoWorkingDistance);
         }
