@@ -58,7 +58,7 @@ public sealed record DistanceTelescopeOption : MagnifierOption
         {
             foreach (var stock in StockMagnifications)
             {
-                if (stock >= needed && stock <= strongest)
+                if (stock >= needed * s.PowerTolerance && stock <= strongest)
                 {
                     m = stock;
                     break;

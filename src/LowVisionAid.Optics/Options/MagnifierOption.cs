@@ -198,9 +198,11 @@ public abstract record MagnifierOption
     /// A one-line plain-language summary, formatted with <paramref name="provider"/>. An option beyond its class's
     /// realistic range says so rather than describing a device that cannot be made.
     /// </summary>
-    public string Summary(IFormatProvider provider) => BeyondRange && PracticalNote is { } note
-        ? Texts.NotPracticalPrefix + note
-        : Describe(provider);
+    public string Summary(IFormatProvider provider) => !IsApplicable && NotApplicableBecause is { } why
+        ? Texts.NotNeededPrefix + why
+        : BeyondRange && PracticalNote is { } note
+            ? Texts.NotPracticalPrefix + note
+            : Describe(provider);
 
     /// <summary>True when the device this option needs is beyond its class's realistic range (<see cref="DeviceRanges"/>).</summary>
     public bool BeyondRange { get; init; }

@@ -32,6 +32,9 @@ public sealed record MovingCloserOption : MagnifierOption
     /// <summary>True for a distance task (sitting nearer), false for a page or screen.</summary>
     public required bool DistanceTask { get; init; }
 
+    /// <summary>Where the page would have to come for the full power: 1/F_eq (never farther than the preferred distance).</summary>
+    public required Distance NeededDistance { get; init; }
+
     /// <summary>True when the print is already large enough at the preferred distance (no move needed).</summary>
     public bool AlreadyLargeEnough => RelativeMagnification <= 1.0 + 1e-9;
 
@@ -47,6 +50,7 @@ public sealed record MovingCloserOption : MagnifierOption
         var available = context.UsableAccommodation + context.MyopicBuiltInAdd;
         // New distance w = 1/F_eq, never farther than the preferred distance (the print is then already large enough).
         var focus = Math.Max(required, 1.0 / context.Preferred);
+        var needed = OptionContext.Metres(1.0 / focus);
         var shortOf = focus - available;
         // Up to 0.50 D short (2 m or more for a full presbyope) the eye's depth of focus covers it: no add (common practice).
         var add = shortOf > NoAddUpTo ? OptionContext.RoundUpToQuarter(shortOf) : 0;
@@ -85,12 +89,27 @@ public sealed record MovingCloserOption : MagnifierOption
             FocusNeeded = OptionContext.Dioptres(focus),
             AddNeeded = OptionContext.Dioptres(add),
             DistanceTask = distanceTask,
+            NeededDistance = needed,
         };
     }
 
     /// <inheritdoc/>
     protected override string Describe(IFormatProvider provider)
     {
+        if (!IsPractical)
+        {
+            return string.Format(
+                provider,
+                "{0} would have to come to {1}, which takes {2:0.00} D of focusing: more than the client's own focusing and a modest add give (a {3:+0.00} D add brings it to {4}, {5:0.#} D of the {6:0.#} D needed).",
+                DistanceTask ? "The client" : "The page",
+                Place(NeededDistance, provider),
+                RequiredPower.Dioptres,
+                AddNeeded.Dioptres,
+                Place(WorkingDistance, provider),
+                DeliveredPower.Dioptres,
+                RequiredPower.Dioptres);
+        }
+
         var where = AlreadyLargeEnough
             ? string.Format(provider, "{0} at {1}", DistanceTask ? "Stay" : "Keep the page", Place(WorkingDistance, provider))
             : string.Format(provider, "{0} {1} instead of {2}", DistanceTask ? "Sit at" : "Bring the page to", Place(WorkingDistance, provider), Place(FromDistance, provider));
@@ -102,6 +121,6 @@ public sealed record MovingCloserOption : MagnifierOption
     }
 
     private static string Place(Distance d, IFormatProvider provider) => d.Metres >= 1
-        ? string.Format(provider, "{0:0.0#} m", d.Metres)
+        ? string.Format(provider, "{0:0.##} m", d.Metres)
         : string.Format(provider, "{0:0.#} cm", d.Centimetres);
 }

@@ -41,7 +41,7 @@ public sealed record NearTelescopeOption : MagnifierOption
         var m = strongest;
         foreach (var stock in StockMagnifications)
         {
-            if (stock >= wanted && stock <= strongest)
+            if (stock >= wanted * context.Settings.PowerTolerance && stock <= strongest)
             {
                 m = stock;
                 break;

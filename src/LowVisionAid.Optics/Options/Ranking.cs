@@ -50,8 +50,9 @@ public enum RankingRule
     ContrastHelp = 8,
 
     /// <summary>
-    /// The simplest, most portable class first: moving closer, large print, built-in screen settings, spectacle adds,
-    /// hand and stand magnifiers; then telescopes and video magnifiers (methods §11; Dickinson; Freeman and Jose).
+    /// The simplest, most portable class first: no device at all (moving closer, large print, built-in screen settings),
+    /// then spectacle adds, hand and stand magnifiers, then telescopes and video magnifiers (methods §11; Dickinson;
+    /// Freeman and Jose).
     /// </summary>
     Simplicity = 9,
 
@@ -61,14 +62,20 @@ public enum RankingRule
     /// </summary>
     LongReadingSupport = 10,
 
+    /// <summary>
+    /// Sustained reading: options with 10 or more letters in view come first (methods §4.3; common practice: long
+    /// reading is slow and tiring with fewer).
+    /// </summary>
+    RoomyField = 11,
+
     /// <summary>With two useful eyes: options that allow binocular use come first.</summary>
-    BothEyes = 11,
+    BothEyes = 12,
 
     /// <summary>The lower cost class first (<see cref="DeviceRanges.Costs"/>; clinic-editable; common practice).</summary>
-    Cost = 12,
+    Cost = 13,
 
     /// <summary>Finally, the eye-to-page distance nearest the preferred working distance (smallest ratio either way) comes first.</summary>
-    NearestWorkingDistance = 13,
+    NearestWorkingDistance = 14,
 }
 
 /// <summary>One reason for an option's position: the rule and whether it counted in the option's favour.</summary>
@@ -98,9 +105,11 @@ public readonly record struct RankingReason(RankingRule Rule, bool InFavour)
         (RankingRule.ContrastHelp, true) => "Brings its own light or contrast: helps with low contrast or dim lighting.",
         (RankingRule.ContrastHelp, false) => "Does little for low contrast or dim lighting.",
         (RankingRule.Simplicity, true) => "Simple and portable: tried first in practice.",
-        (RankingRule.Simplicity, false) => "A telescopic or electronic device: tried when simpler ones fail.",
+        (RankingRule.Simplicity, false) => "A telescope or video magnifier: tried when plain lenses fail.",
         (RankingRule.LongReadingSupport, true) => "Holds the focus for long reading.",
         (RankingRule.LongReadingSupport, false) => "Must be held in focus by hand: tiring for long reading.",
+        (RankingRule.RoomyField, true) => "10 or more letters in view: comfortable for long reading.",
+        (RankingRule.RoomyField, false) => "Fewer than 10 letters in view: long reading may be slow and tiring.",
         (RankingRule.Cost, true) => "Low cost.",
         (RankingRule.Cost, false) => "Costs more.",
         (RankingRule.NearestWorkingDistance, true) => "Eye-to-page distance within 25 % of the preferred working distance.",
@@ -118,7 +127,7 @@ public sealed record RankedOption(int Position, MagnifierOption Option, Immutabl
 /// <summary>Orders options by the <see cref="RankingRule"/> rules, in order.</summary>
 public static class Ranking
 {
-    private const int RuleCount = 13;
+    private const int RuleCount = 14;
 
     /// <summary>The rules that concern a request, in the order they are applied.</summary>
     public static ImmutableArray<RankingRule> RulesFor(PlanRequest request)
@@ -191,7 +200,8 @@ public static class Ranking
             var reasons = new RankingReason[activeCount];
             for (var r = 0; r < activeCount; r++)
             {
-                reasons[r] = new RankingReason(active[r], tiers[(i * RuleCount) + r] == 0);
+                // Plain lenses pass the simplicity rule too: only telescopes and video count against it.
+                reasons[r] = new RankingReason(active[r], tiers[(i * RuleCount) + r] <= (active[r] == RankingRule.Simplicity ? 1 : 0));
             }
 
             ranked[position] = new RankedOption(position + 1, options[i], ImmutableCollectionsMarshal.AsImmutableArray(reasons));
@@ -219,7 +229,7 @@ public static class Ranking
         RankingRule.EnoughCharacters => !IsDistanceTask(request.Task),
         RankingRule.HandsFree => request.Constraints.HandsFreeWanted || request.Task is ReadingTask.Writing,
         RankingRule.NoSteadyHand => request.Constraints.Tremor,
-        RankingRule.LongReadingSupport => request.Task is ReadingTask.SustainedReading,
+        RankingRule.LongReadingSupport or RankingRule.RoomyField => request.Task is ReadingTask.SustainedReading,
         RankingRule.BothEyes => request.Constraints.UsefulEyes >= 2,
         RankingRule.ContrastHelp => request.Constraints.DimLighting || request.Constraints.LogContrastSensitivity is < LowContrast,
         _ => true,
@@ -251,8 +261,9 @@ public static class Ranking
         RankingRule.NoSteadyHand => o.SuitsTremor ? 0 : 1,
         RankingRule.BothEyes => o.Binocular.Feasible ? 0 : 1,
         RankingRule.ContrastHelp => HelpsContrast(o, request.Constraints.LogContrastSensitivity ?? 2) ? 0 : 1,
-        RankingRule.Simplicity => IsSimple(o.Kind) ? 0 : 1,
+        RankingRule.Simplicity => SimplicityTier(o.Kind),
         RankingRule.LongReadingSupport => o.SuitsTremor ? 0 : 1,
+        RankingRule.RoomyField => o.CharactersInView is null or >= 10 ? 0 : 1,
         RankingRule.Cost => (int)o.Cost - 1,
         RankingRule.NearestWorkingDistance => mismatch <= WithinQuarter ? 0 : 1,
         _ => 0,
@@ -264,9 +275,15 @@ public static class Ranking
     private static readonly double WithinQuarter = Math.Log(1.25);
 
     /// <summary>
-    /// The simple, portable classes tried first (methods §11): everything but telescopes and video magnifiers.
+    /// The order of trial by class (methods §11): 0 for no device (moving closer, large print, built-in screen
+    /// settings), 1 for plain lenses (spectacle add, hand and stand magnifiers), 2 for telescopes and video magnifiers.
     /// </summary>
-    public static bool IsSimple(OptionKind kind) => kind is not (OptionKind.NearTelescope or OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.VideoMagnifier);
+    public static int SimplicityTier(OptionKind kind) => kind switch
+    {
+        OptionKind.MovingCloser or OptionKind.LargePrint or OptionKind.ScreenMagnification => 0,
+        OptionKind.SpectacleAdd or OptionKind.HandMagnifier or OptionKind.StandMagnifier => 1,
+        _ => 2,
+    };
 
     private static bool IsDistanceKind(OptionKind kind) => kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
 

@@ -17,6 +17,9 @@ public static class Texts
     /// <summary>Spectacle add not needed.</summary>
     public const string AccommodationAloneIsEnough = "The client's own focusing gives this power: see moving closer.";
 
+    /// <summary>The start of the summary of an option that does not apply.</summary>
+    public const string NotNeededPrefix = "Not needed: ";
+
     /// <summary>The start of the summary of an option beyond its class's range.</summary>
     public const string NotPracticalPrefix = "Not practical: ";
 
