@@ -107,7 +107,7 @@ public sealed partial class PlanReportPagesTests
 
         Assert.Equal(HttpStatusCode.OK, response.StatusCode);
         var pdf = Read(await response.Content.ReadAsByteArrayAsync());
-        Assert.Contains("2026.12.1", pdf.Text, StringComparison.Ordinal);
+        Assert.Contains(LowVisionAid.Optics.Planning.Planner.MethodVersion, pdf.Text, StringComparison.Ordinal);
         Assert.Contains("Preferred working distance", pdf.Text, StringComparison.Ordinal);
         // Table cells wrap within their column, so words of one cell may be read between other cells' words.
         AssertWords("Kestenbaum's rule with reserve", pdf.Text);
@@ -211,7 +211,7 @@ public sealed partial class PlanReportPagesTests
         Assert.Equal(3, Regex.Count(html, "<table class=\"trade-off-table stack-narrow\">"));
         // The window holds exactly the letters the stored plan counted (22).
         Assert.Equal(22, Regex.Count(html, "class=\"" + Reports.Figures.TradeOffFigures.LetterClass + "\""));
-        Assert.Contains("2026.12.1", html, StringComparison.Ordinal);
+        Assert.Contains(LowVisionAid.Optics.Planning.Planner.MethodVersion, html, StringComparison.Ordinal);
         Assert.DoesNotContain("style=", html, StringComparison.Ordinal);
     }
 
