@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Planning;
@@ -43,8 +44,11 @@ public sealed record PlanSettings
     /// <summary>Assumed spectacle-plane-to-lens distance for a stand magnifier. Default 15 cm (assumption).</summary>
     public Distance StandMagnifierEyeDistance { get; init; } = Distance.FromCentimetres(15);
 
-    /// <summary>Clear aperture assumed for a hand or stand magnifier not taken from the kit. Default 50 mm (assumption).</summary>
-    public Distance AssumedMagnifierAperture { get; init; } = Distance.FromMillimetres(50);
+    /// <summary>
+    /// The realistic range of each device class, the aperture made at each power and the cost classes, in one table
+    /// (<see cref="DeviceRanges"/>; the clinic may edit it). Default <see cref="DeviceRanges.Default"/>.
+    /// </summary>
+    public DeviceRanges Ranges { get; init; } = DeviceRanges.Default;
 
     /// <summary>Clear aperture assumed for a spectacle lens. Default 40 mm (assumption).</summary>
     public Distance SpectacleLensAperture { get; init; } = Distance.FromMillimetres(40);
@@ -55,7 +59,7 @@ public sealed record PlanSettings
     /// <summary>The largest add counted as "modest" for moving closer. Default +4.00 D (common practice; ready readers).</summary>
     public Power ModestAddLimit { get; init; } = Power.FromDioptres(4);
 
-    /// <summary>Screen width assumed for a video magnifier. Default 40 cm (assumption; a 19–20 inch monitor).</summary>
+    /// <summary>Screen width assumed for a video magnifier or a computer. Default 40 cm (assumption; a 19–20 inch monitor).</summary>
     public Distance ScreenWidth { get; init; } = Distance.FromCentimetres(40);
 
     /// <summary>Apparent (eyepiece) field assumed for telescopes. Default 40° (assumption, from memory).</summary>

@@ -47,7 +47,7 @@ public static class Planner
             Add(distanceProblem);
         }
 
-        if (request.Task == ReadingTask.DistanceViewing)
+        if (Ranking.IsDistanceTask(request.Task))
         {
             if (request.DistanceAcuity is null || request.GoalDistanceAcuity is null)
             {
@@ -145,7 +145,7 @@ public static class Planner
         }
 
 
-        var distanceTask = request.Task == ReadingTask.DistanceViewing;
+        var distanceTask = Ranking.IsDistanceTask(request.Task);
         EstimateComparison? comparison = null;
         ReadingCurveAnalysis? curve = null;
         PowerMethod? from = null;
@@ -170,12 +170,14 @@ public static class Planner
             }
         }
         var context = new OptionContext(effective);
-        var options = new List<MagnifierOption>(distanceTask ? 2 : 7);
-        var notConsidered = new List<NotConsidered>(distanceTask ? 6 : 2);
+        var options = new List<MagnifierOption>(distanceTask ? 3 : 8);
+        var notConsidered = new List<NotConsidered>(distanceTask ? 7 : 3);
         options.Add(MovingCloserOption.Create(context, distanceTask));
         if (distanceTask)
         {
             options.Add(DistanceTelescopeOption.Create(context, request.DistanceAcuity!.Value, request.GoalDistanceAcuity!.Value));
+            options.Add(DistanceTelescopeOption.Create(context, request.DistanceAcuity!.Value, request.GoalDistanceAcuity!.Value, spectacleMounted: true));
+            notConsidered.Add(new(OptionKind.ScreenMagnification, ScreensOnly));
             notConsidered.Add(new(OptionKind.LargePrint, NearOnly));
             notConsidered.Add(new(OptionKind.SpectacleAdd, NearOnly));
             notConsidered.Add(new(OptionKind.HandMagnifier, NearOnly));
@@ -199,7 +201,17 @@ public static class Planner
 
             options.Add(NearTelescopeOption.Create(context));
             options.Add(VideoMagnifierOption.Create(context));
+            if (request.Task == ReadingTask.Screen)
+            {
+                options.Add(ScreenMagnificationOption.Create(context));
+            }
+            else
+            {
+                notConsidered.Add(new(OptionKind.ScreenMagnification, ScreensOnly));
+            }
+
             notConsidered.Add(new(OptionKind.DistanceTelescope, DistanceOnly));
+            notConsidered.Add(new(OptionKind.SpectacleTelescope, DistanceOnly));
         }
 
         var ranked = Ranking.Rank(options, effective);
@@ -300,6 +312,9 @@ public static class Planner
     /// <summary>Not considered for near tasks.</summary>
     public const string DistanceOnly = "A distance device: plan distance viewing to see it.";
 
+    /// <summary>Not considered for tasks that are not on a screen.</summary>
+    public const string ScreensOnly = "Built-in screen magnification: for screen tasks only.";
+
     /// <summary>
     /// For distance viewing, the requirement comes from the acuities: EVD = d / M with M = MAR_current / MAR_goal,
     /// so F_eq = M / d (angular magnification as an equivalent viewing distance; Bailey).
@@ -310,6 +325,25 @@ public static class Planner
         return request with { RequiredPower = Power.FromDioptres(m / request.PreferredDistance.Abs().Metres) };
     }
 
+    /// <summary>
+    /// The caution for a need beyond every optical class (no spectacle add, magnifier or telescope meets it in a
+    /// practical form), and beyond the video magnifier too, or null (methods §11 "Realistic device ranges").
+    /// </summary>
+    private static Caution? BeyondFor(List<MagnifierOption> options)
+    {
+        var optical = false;
+        var electronic = false;
+        foreach (var o in options)
+        {
+            var usable = o.IsApplicable && o.MeetsRequiredPower && o.IsPractical;
+            optical |= usable && o.Kind is OptionKind.SpectacleAdd or OptionKind.HandMagnifier or OptionKind.StandMagnifier
+                or OptionKind.NearTelescope or OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.MovingCloser;
+            electronic |= usable && o.Kind is OptionKind.VideoMagnifier or OptionKind.ScreenMagnification;
+        }
+
+        return optical ? null : electronic ? Caution.BeyondOptical : Caution.BeyondEveryDevice;
+    }
+
     private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> kit, bool accommodationEstimated, bool estimatesDisagree)
     {
         var anyLens = false;
@@ -318,10 +352,10 @@ public static class Planner
         var anyPowered = false;
         foreach (var o in options)
         {
-            anyLens |= o.LensPower is not null || o.Kind == OptionKind.DistanceTelescope;
-            anyStrong |= o.Kind is OptionKind.DistanceTelescope or OptionKind.NearTelescope || (o.LensPower is { } p && p.Dioptres >= 4);
+            anyLens |= o.LensPower is not null || o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
+            anyStrong |= o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.NearTelescope || (o.LensPower is { } p && p.Dioptres >= 4);
             anyShort |= o.WorkingDistance.Metres < 0.25;
-            anyPowered |= o.Kind == OptionKind.VideoMagnifier;
+            anyPowered |= o.Kind == OptionKind.VideoMagnifier || o is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
         }
 
         foreach (var k in kit)
@@ -329,14 +363,20 @@ public static class Planner
             anyPowered |= k.Option is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
         }
 
-        var distance = request.Task == ReadingTask.DistanceViewing;
+        var distance = Ranking.IsDistanceTask(request.Task);
+        var beyond = BeyondFor(options);
         var contrast = request.Constraints.LogContrastSensitivity is { } cs && cs < Ranking.LowContrast
             ? (cs < Ranking.VeryLowContrast ? Caution.VideoOrNonVisual : Caution.LightingAssessment)
             : null;
-        var count = 3 + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
+        var count = 3 + (beyond is null ? 0 : 1) + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
         var cautions = new Caution[count];
         var n = 0;
         cautions[n++] = Caution.StartingPoint;
+        if (beyond is not null)
+        {
+            cautions[n++] = beyond;
+        }
+
         if (estimatesDisagree)
         {
             cautions[n++] = Caution.EstimatesDisagree;

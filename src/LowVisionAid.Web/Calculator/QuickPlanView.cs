@@ -94,10 +94,16 @@ public sealed record OptionView
     public double? EyeToLensCm { get; init; }
     public double? LinearFieldCm { get; init; }
     public double? CharactersInView { get; init; }
+    public int? LettersInView { get; init; }
+    public double? Magnification { get; init; }
+    public double? MagnificationNeeded { get; init; }
+    public double? ZoomPercent { get; init; }
+    public double? TextSizePixels { get; init; }
     public double? DepthOfFieldCm { get; init; }
     public required bool BothEyesPossible { get; init; }
     public required double ConvergenceDemandPrismDioptres { get; init; }
-    public double? BaseInPrismDioptres { get; init; }
+    public double? BaseInPrismEachEyeDioptres { get; init; }
+    public double? ConvergenceLeftAfterPrismDioptres { get; init; }
     public required double AccommodationOrAddNeededDioptres { get; init; }
     public required bool HandsFree { get; init; }
     public required bool SuitsTremor { get; init; }

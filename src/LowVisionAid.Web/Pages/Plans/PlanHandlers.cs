@@ -84,6 +84,7 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             NearTestDistanceMetres = visit.NearTestDistance?.Metres,
             ReadingSpeeds = [.. visit.ReadingSpeeds.OrderBy(s => s.Position).Select(s => new SpeedPoint(s.PrintSize.M, s.WordsPerMinute))],
             LogContrastSensitivity = visit.ContrastLogCs,
+            DimLighting = visit.HomeLighting is HomeLighting.Dim or HomeLighting.Poor,
             AddWornDioptres = visit.AddWorn?.Dioptres,
             MeasuredAmplitudeDioptres = visit.AccommodationMeasured?.Dioptres,
             WorkingDistanceMetres = visit.WorkingDistance?.Metres ?? 0,

@@ -31,6 +31,9 @@ public sealed record PlanInputs
 
     public double? LogContrastSensitivity { get; init; }
 
+    /// <summary>Home lighting recorded as dim or poor at the visit: illuminated devices rank higher.</summary>
+    public bool DimLighting { get; init; }
+
     public double? AddWornDioptres { get; init; }
 
     public double? MeasuredAmplitudeDioptres { get; init; }
@@ -90,6 +93,7 @@ public sealed record PlanInputs
                     : null,
                 AddWorn = AddWornDioptres is { } add ? Power.FromDioptres(add) : null,
                 LogContrastSensitivity = LogContrastSensitivity,
+                DimLighting = DimLighting,
             },
             Kit = [.. Kit.Select(k => k.ToCore())],
             Settings = PlanSettings.Default with
