@@ -45,7 +45,7 @@ public static class Texts
     public const string PostureScreen = "Hold or place the screen at the stated distance; a stand or arm for the screen saves the neck and arms.";
 
     /// <summary>Posture: spectacle-mounted telescopes.</summary>
-    public const string PostureSpectacleTelescope = "Seated, for watching (television, a lecture, a stage); take the spectacles off or look under the telescope to move about.";
+    public const string PostureSpectacleTelescope = "Seated, for watching (television, a talk, a stage); take the spectacles off or look under the telescope to move about.";
 
     /// <summary>Light for close work without a lens.</summary>
     public const string LightCloseWork = "Light the page well from the side, shielded from the eyes; matt paper and dark, well-spaced print help.";

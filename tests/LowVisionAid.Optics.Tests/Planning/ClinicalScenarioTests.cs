@@ -216,7 +216,7 @@ public class ClinicalScenarioTests
     [Fact]
     public void For_a_whiteboard_with_hands_wanted_free_a_spectacle_mounted_telescope_ranks_above_a_hand_held_one()
     {
-        // Ms N. Oduya, 19, oculocutaneous albinism, 6/36; the lecture-room board at 5 m needs 6/12: 3×. She takes notes,
+        // Ms N. Oduya, 19, oculocutaneous albinism, 6/36; the classroom board at 5 m needs 6/12: 3×. She takes notes,
         // so hands-free use is wanted. Sitting at the front (5/3 = 1.67 m, 0.6 D, within her focusing) comes first
         // (methods §11); of the telescopes, a spectacle-mounted 3× Galilean, binocular at 3× (methods §11; Freeman and
         // Jose, from memory), ranks above a hand-held one. Any distance task at any entered distance is planned.
