@@ -23,18 +23,22 @@ internal sealed class ClinicSignInManager(
 {
     public override async Task<SignInResult> PasswordSignInAsync(string userName, string password, bool isPersistent, bool lockoutOnFailure)
     {
-        var result = await base.PasswordSignInAsync(userName, password, isPersistent, lockoutOnFailure).ConfigureAwait(false);
+        if (await UserManager.FindByNameAsync(userName).ConfigureAwait(false) is not { } user)
+        {
+            AppLog.SignInUnknownName(events);
+            return SignInResult.Failed;
+        }
+
+        return await PasswordSignInAsync(user, password, isPersistent, lockoutOnFailure).ConfigureAwait(false);
+    }
+
+    public override async Task<SignInResult> PasswordSignInAsync(IdentityUser user, string password, bool isPersistent, bool lockoutOnFailure)
+    {
+        ArgumentNullException.ThrowIfNull(user);
+        var result = await base.PasswordSignInAsync(user, password, isPersistent, lockoutOnFailure).ConfigureAwait(false);
         if (!result.Succeeded)
         {
-            var user = await UserManager.FindByNameAsync(userName).ConfigureAwait(false);
-            if (user?.UserName is { } known)
-            {
-                AppLog.SignInRefused(events, known, Outcome(result));
-            }
-            else
-            {
-                AppLog.SignInUnknownName(events);
-            }
+            AppLog.SignInRefused(events, user.UserName ?? "(no name)", Outcome(result));
         }
 
         return result;

@@ -56,8 +56,9 @@ public sealed class SignInModel(SignInManager<IdentityUser> signIn, UserManager<
 
         var name = Input.UserName.Trim();
         var user = await users.FindByNameAsync(name).ConfigureAwait(false);
+        // An unknown name goes through the name overload, which refuses it (and logs that no account has that name).
         var result = user is null
-            ? Microsoft.AspNetCore.Identity.SignInResult.Failed
+            ? await signIn.PasswordSignInAsync(name, Input.Password, isPersistent: false, lockoutOnFailure: true).ConfigureAwait(false)
             : await signIn.PasswordSignInAsync(user, Input.Password, isPersistent: false, lockoutOnFailure: true).ConfigureAwait(false);
         if (user is null || result.IsLockedOut)
         {

@@ -84,7 +84,8 @@ public sealed class QuickCalculatorModel(QuickPlanHandler handler, TradeOffFigur
     public string? ErrorFor(string field) =>
         ModelState.TryGetValue($"{nameof(Input)}.{field}", out var entry) && entry.Errors.Count > 0 ? entry.Errors[0].ErrorMessage : null;
 
-    public static string Dioptres(double value) => (Math.Round(value, 2) is var v && v == 0 ? 0 : v).ToString("0.00", Culture) + " D";
+    // The optics core's one dioptre label (it drops arithmetic noise below the shown digits before rounding).
+    public static string Dioptres(double value) => Power.FromDioptres(Math.Abs(value) < 0.005 ? 0 : value).ToString("0.00", Culture);
 
     public static string Centimetres(double value) => value < 1
         ? (value * 10).ToString("0.0", Culture) + " mm"
