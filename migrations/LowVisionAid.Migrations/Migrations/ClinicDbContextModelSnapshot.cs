@@ -393,6 +393,9 @@ namespace LowVisionAid.Migrations.Migrations
 
                     b.HasIndex("PlanId");
 
+                    b.HasIndex(new[] { "FollowUpDue", "Id" }, "IX_Trials_OpenFollowUps")
+                        .HasFilter("\"FollowUpDue\" IS NOT NULL AND \"FollowUpDone\" IS NULL");
+
                     b.ToTable("Trials");
                 });
 

@@ -203,7 +203,7 @@ public sealed partial class ClientListTests
             (await db.Clients.SingleAsync(c => c.Id == id)).Name = "Zoë Åberg";
             await db.SaveChangesAsync();
             var migrator = db.GetService<IMigrator>();
-            var before = db.Database.GetMigrations().TakeWhile(m => !m.EndsWith("_ClientListColumns", StringComparison.Ordinal)).Last();
+            var before = db.Database.GetMigrations().TakeWhile(m => !m.EndsWith("_ListsAtScale", StringComparison.Ordinal)).Last();
             await migrator.MigrateAsync(before);
         });
 

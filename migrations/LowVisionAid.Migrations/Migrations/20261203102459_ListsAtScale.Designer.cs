@@ -11,8 +11,8 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace LowVisionAid.Migrations.Migrations
 {
     [DbContext(typeof(ClinicDbContext))]
-    [Migration("20261203100329_ClientListColumns")]
-    partial class ClientListColumns
+    [Migration("20261203102459_ListsAtScale")]
+    partial class ListsAtScale
     {
         /// <inheritdoc />
         protected override void BuildTargetModel(ModelBuilder modelBuilder)
@@ -395,6 +395,9 @@ namespace LowVisionAid.Migrations.Migrations
                     b.HasIndex("KitDeviceId");
 
                     b.HasIndex("PlanId");
+
+                    b.HasIndex(new[] { "FollowUpDue", "Id" }, "IX_Trials_OpenFollowUps")
+                        .HasFilter("\"FollowUpDue\" IS NOT NULL AND \"FollowUpDone\" IS NULL");
 
                     b.ToTable("Trials");
                 });

@@ -6,7 +6,7 @@ using Microsoft.EntityFrameworkCore.Migrations;
 namespace LowVisionAid.Migrations.Migrations
 {
     /// <inheritdoc />
-    public partial class ClientListColumns : Migration
+    public partial class ListsAtScale : Migration
     {
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
@@ -26,6 +26,12 @@ namespace LowVisionAid.Migrations.Migrations
                 defaultValue: "");
 
             migrationBuilder.CreateIndex(
+                name: "IX_Trials_OpenFollowUps",
+                table: "Trials",
+                columns: new[] { "FollowUpDue", "Id" },
+                filter: "\"FollowUpDue\" IS NOT NULL AND \"FollowUpDone\" IS NULL");
+
+            migrationBuilder.CreateIndex(
                 name: "IX_Clients_LastVisitDate_Code",
                 table: "Clients",
                 columns: new[] { "LastVisitDate", "Code" },
@@ -38,6 +44,10 @@ namespace LowVisionAid.Migrations.Migrations
         /// <inheritdoc />
         protected override void Down(MigrationBuilder migrationBuilder)
         {
+            migrationBuilder.DropIndex(
+                name: "IX_Trials_OpenFollowUps",
+                table: "Trials");
+
             migrationBuilder.DropIndex(
                 name: "IX_Clients_LastVisitDate_Code",
                 table: "Clients");
