@@ -46,7 +46,7 @@ public static class SyntheticClinic
             }
 
             templates = [.. (await db.Plans.AsNoTracking().OrderBy(p => p.Id).ToListAsync(ct)).Select(p => (p.MethodVersion, p.InputsJson, p.OutputsJson))];
-            if (templates.Count == 0)
+            if (templates.Count == 0 && size.Plans > 0)
             {
                 throw new InvalidOperationException("The database holds no plan to copy: start the app once on this folder with the demo clinic loaded.");
             }
