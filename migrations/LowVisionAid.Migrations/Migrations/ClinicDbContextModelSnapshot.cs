@@ -534,6 +534,13 @@ namespace LowVisionAid.Migrations.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
+                    b.Property<double?>("ViewingDistance")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("ViewingDistanceText")
+                        .HasMaxLength(60)
+                        .HasColumnType("TEXT");
+
                     b.Property<int>("VisitId")
                         .HasColumnType("INTEGER");
 
