@@ -131,6 +131,11 @@ namespace LowVisionAid.Migrations.Migrations
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("CostClasses")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
                     b.Property<DateTime>("CreatedUtc")
                         .HasColumnType("TEXT");
 
@@ -546,6 +551,13 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<string>("Task")
                         .IsRequired()
                         .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double?>("ViewingDistance")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("ViewingDistanceText")
+                        .HasMaxLength(60)
                         .HasColumnType("TEXT");
 
                     b.Property<int>("VisitId")

@@ -18,7 +18,7 @@ public static class PlanBuilder
         var assumptions = new List<string>();
         foreach (var task in inputs.Goals.Where(g => g.ViewingDistanceMetres is null && TaskRules.For(g.Task).Kind == ReadingTask.DistanceViewing).Select(g => g.Task).Distinct())
         {
-            assumptions.Add($"{Labels.Task(task)} is planned at {Length(TaskRules.For(task).Example, inputs.Imperial)}, an assumed viewing distance; measure the client's own.");
+            assumptions.Add($"{Labels.Task(task)} is planned at {ViewingLength(TaskRules.For(task).Example, inputs.Imperial)}, an assumed viewing distance; measure the client's own.");
         }
 
         if (inputs.ReadingSpeeds.Count > 0)
@@ -31,7 +31,8 @@ public static class PlanBuilder
 
     private static GoalPlan Goal(PlanInputs inputs, GoalPoint goal)
     {
-        var title = Labels.Task(goal.Task) + (goal.Detail is null ? "" : $" ({goal.Detail})");
+        var title = Labels.Task(goal.Task) + (goal.Detail is null ? "" : $" ({goal.Detail})")
+            + (goal.ViewingDistanceMetres is { } seen ? $" at {ViewingLength(Distance.FromMetres(seen), inputs.Imperial)}" : "");
         var request = inputs.RequestFor(goal);
         var taskLabel = TaskLabel(request.Task);
         var problems = Planner.Check(request);
@@ -160,6 +161,11 @@ public static class PlanBuilder
     }
 
     private static string Dioptres(Power p) => p.ToString(null, Invariant);
+
+    // A distance task's viewing distance reads in metres or feet ("8 m", "26.2 ft"), as it is measured in a room.
+    private static string ViewingLength(Distance d, bool imperial) => imperial
+        ? (d.Inches / 12).ToString("0.#", Invariant) + " ft"
+        : d.Metres < 1 ? Length(d, imperial) : d.Metres.ToString("0.##", Invariant) + " m";
 
     private static string Length(Distance d, bool imperial) =>
         imperial ? DistanceNotation.Format(d, Invariant, "in") : DistanceNotation.Format(d, Invariant, d.Abs().Centimetres < 1 ? "mm" : null);
