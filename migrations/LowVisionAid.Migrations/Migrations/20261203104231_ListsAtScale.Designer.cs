@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace LowVisionAid.Migrations.Migrations
 {
     [DbContext(typeof(ClinicDbContext))]
-    [Migration("20261203102459_ListsAtScale")]
+    [Migration("20261203104231_ListsAtScale")]
     partial class ListsAtScale
     {
         /// <inheritdoc />
@@ -132,6 +132,11 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<string>("ClinicName")
                         .IsRequired()
                         .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("CostClasses")
+                        .IsRequired()
+                        .HasMaxLength(4000)
                         .HasColumnType("TEXT");
 
                     b.Property<DateTime>("CreatedUtc")
@@ -549,6 +554,13 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<string>("Task")
                         .IsRequired()
                         .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double?>("ViewingDistance")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("ViewingDistanceText")
+                        .HasMaxLength(60)
                         .HasColumnType("TEXT");
 
                     b.Property<int>("VisitId")
