@@ -51,7 +51,8 @@ public sealed class AppProcess : IAsyncDisposable
         var address = new Uri($"http://127.0.0.1:{port}/");
         var info = new ProcessStartInfo("dotnet")
         {
-            WorkingDirectory = Path.GetDirectoryName(webDll)!,
+            // The project folder, as `dotnet run` uses: the content root, where wwwroot is.
+            WorkingDirectory = Path.GetFullPath(Path.Combine(Path.GetDirectoryName(webDll)!, "..", "..", "..")),
             RedirectStandardOutput = true,
             RedirectStandardError = true,
             UseShellExecute = false,

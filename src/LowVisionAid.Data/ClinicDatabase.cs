@@ -43,6 +43,14 @@ public static class ClinicDatabase
     {
         ArgumentNullException.ThrowIfNull(db);
         await AccessHistoryUpgrade.AdoptAsync(db, ct).ConfigureAwait(false);
+
+        // Migrate also builds the whole model to compare it with the last migration's (seconds at start on a slow PC);
+        // with nothing pending there is nothing to apply and nothing to fill in.
+        if (!(await db.Database.GetPendingMigrationsAsync(ct).ConfigureAwait(false)).Any())
+        {
+            return;
+        }
+
         await db.Database.MigrateAsync(ct).ConfigureAwait(false);
         await ClientSearch.FillMissingAsync(db, ct).ConfigureAwait(false);
     }
