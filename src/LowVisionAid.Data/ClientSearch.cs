@@ -56,6 +56,31 @@ public static class ClientSearch
     /// <summary>The stored search text of a client: folded code and name.</summary>
     public static string For(string code, string? name) => Fold(code + " " + name);
 
+    /// <summary>
+    /// The clients whose code or name holds <paramref name="typed"/>. Three or more letters with no LIKE wildcard in
+    /// them are looked up in the trigram index ClientSearchIndex (SQLite FTS5 over the search text, made and kept by
+    /// the ListsAtScale migration's triggers), so only the matching clients are read; anything shorter, or holding
+    /// %, _ or \, is matched against the stored search text (which the client-list index also holds).
+    /// </summary>
+    public static IQueryable<Entities.Client> Matching(ClinicDbContext db, string typed)
+    {
+        ArgumentNullException.ThrowIfNull(db);
+        var folded = Fold(typed);
+        if (folded.Length > MaximumLength)
+        {
+            folded = folded[..MaximumLength];
+        }
+
+        if (folded.Length >= 3 && folded.IndexOfAny(['%', '_', '\\']) < 0)
+        {
+            var anywhere = "%" + folded + "%";
+            return db.Clients.FromSql($"SELECT * FROM Clients WHERE Id IN (SELECT rowid FROM ClientSearchIndex WHERE SearchText LIKE {anywhere})");
+        }
+
+        var pattern = ContainsPattern(folded);
+        return db.Clients.Where(c => EF.Functions.Like(c.SearchText, pattern, "\\"));
+    }
+
     /// <summary>A LIKE pattern that finds <paramref name="typed"/> anywhere, with \ as the escape character.</summary>
     public static string ContainsPattern(string typed)
     {

@@ -131,7 +131,7 @@ public sealed class BackupRestoreTests
         await TwoContextSchema.BuildAsync(data.Path, TwoContextSchema.ClinicMigrationThen, withAccess: false);
         await using (var db = TwoContextSchema.Context(data.Path))
         {
-            db.Clients.Add(new LowVisionAid.Data.Entities.Client { Code = "OLD-001", Name = "Invented Earlier Client" });
+            TwoContextSchema.AddEarlierClient(db, "OLD-001", "Invented Earlier Client");
             await db.SaveChangesAsync();
         }
 

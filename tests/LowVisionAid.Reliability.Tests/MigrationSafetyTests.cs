@@ -150,7 +150,7 @@ public sealed class MigrationSafetyTests(ITestOutputHelper output)
             db.Users.Add(user);
             db.Roles.Add(role);
             db.UserRoles.Add(new IdentityUserRole<string> { UserId = user.Id, RoleId = role.Id });
-            db.Clients.Add(new LowVisionAid.Data.Entities.Client { Code = "EARLIER-7", Name = "Invented Earlier Person" });
+            TwoContextSchema.AddEarlierClient(db, "EARLIER-7", "Invented Earlier Person");
             db.AuditEntries.Add(new LowVisionAid.Data.Audit.AuditEntry { AtUtc = new DateTime(2026, 12, 1, 22, 30, 0, DateTimeKind.Utc), Actor = name, RecordType = "Client", RecordId = 1 });
             await db.SaveChangesAsync();
         }
@@ -171,7 +171,10 @@ public sealed class MigrationSafetyTests(ITestOutputHelper output)
         Assert.Contains(name, users, StringComparison.Ordinal);
         var after = DatabaseDump.Read(data.DatabasePath, Bookkeeping);
         Assert.Equal(before["AspNetUserRoles"], after["AspNetUserRoles"]);
-        Assert.Equal(before["Clients"], after["Clients"]);
+        // The client keeps every earlier column's value; the two columns added since are filled from the rest.
+        string[] added = ["LastVisitDate", "SearchText"];
+        Assert.Equal(before["Clients"], after["Clients"].Select(row => string.Join('|', row.Split('|').Where(cell => !added.Any(a => cell.StartsWith(a + "=", StringComparison.Ordinal))))));
+        Assert.Contains("|SearchText=earlier-7 invented earlier person", Assert.Single(after["Clients"]), StringComparison.Ordinal);
         Assert.Single(after["AspNetUsers"]);
 
         // Rows may be added at start (the two missing roles, audit lines), never changed or lost
@@ -247,7 +250,7 @@ public sealed class MigrationSafetyTests(ITestOutputHelper output)
     {
         using var connection = new SqliteConnection(new SqliteConnectionStringBuilder { DataSource = path, Pooling = false }.ToString());
         connection.Open();
-        var tables = Query(connection, "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'")
+        var tables = Query(connection, "SELECT name FROM pragma_table_list WHERE schema = 'main' AND type = 'table' AND name NOT LIKE 'sqlite_%'")
             .Select(r => r[0]).Where(t => !Bookkeeping.Contains(t)).ToList();
         var parents = tables.ToDictionary(t => t, t => Query(connection, $"PRAGMA foreign_key_list(\"{t}\")").Select(r => (Table: r[2], From: r[3], To: r[4])).ToList());
         var ordered = new List<string>();

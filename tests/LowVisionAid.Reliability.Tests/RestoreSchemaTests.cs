@@ -69,7 +69,10 @@ public sealed class RestoreSchemaTests
         await ClinicForms.AddClientAsync(client, "TRIG-001", "Invented After Refusal");
 
         Assert.Equal(clients + 1, DatabaseDump.Scalar(app.Data.DatabasePath, "SELECT count(*) FROM Clients"));
-        Assert.Equal(0, DatabaseDump.Scalar(app.Data.DatabasePath, "SELECT count(*) FROM sqlite_master WHERE type = 'trigger'"));
+        // Only the triggers the app's own migrations make (they keep the client search index) are in the database.
+        Assert.Equal(0, DatabaseDump.Scalar(app.Data.DatabasePath,
+            "SELECT count(*) FROM sqlite_master WHERE type = 'trigger' AND name NOT IN ('Clients_SearchIndex_Insert', 'Clients_SearchIndex_Delete', 'Clients_SearchIndex_Update')"));
+        Assert.Equal(3, DatabaseDump.Scalar(app.Data.DatabasePath, "SELECT count(*) FROM sqlite_master WHERE type = 'trigger'"));
     }
 
     [Fact]
@@ -116,7 +119,7 @@ public sealed class RestoreSchemaTests
         await using (var db = TwoContextSchema.Context(older.Path))
         {
             await db.GetService<IMigrator>().MigrateAsync(TwoContextSchema.ClinicMigrationThen);
-            db.Clients.Add(new LowVisionAid.Data.Entities.Client { Code = "OLDER-001", Name = "Invented Older Client" });
+            TwoContextSchema.AddEarlierClient(db, "OLDER-001", "Invented Older Client");
             await db.SaveChangesAsync();
         }
 

@@ -108,8 +108,8 @@ namespace LowVisionAid.Migrations.Migrations
 
                     b.HasIndex("Name");
 
-                    b.HasIndex("LastVisitDate", "Code")
-                        .IsDescending(true, false);
+                    b.HasIndex("LastVisitDate", "Code", "SearchText")
+                        .IsDescending(true, false, false);
 
                     b.ToTable("Clients");
                 });

@@ -13,7 +13,8 @@ public static class DatabaseDump
         var tables = new List<string>();
         using (var list = connection.CreateCommand())
         {
-            list.CommandText = "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name <> '__EFMigrationsLock' ORDER BY name";
+            // Ordinary tables only: a full-text index (a virtual table and its shadow tables) is derived from them.
+            list.CommandText = "SELECT name FROM pragma_table_list WHERE schema = 'main' AND type = 'table' AND name NOT LIKE 'sqlite_%' AND name <> '__EFMigrationsLock' ORDER BY name";
             using var reader = list.ExecuteReader();
             while (reader.Read())
             {

@@ -129,6 +129,18 @@ public static class TwoContextSchema
     """;
 
     /// <summary>A context on the database file in <paramref name="folder"/>, configured as the app configures it.</summary>
+    /// <summary>
+    /// A client row as the first clinic schema stores it. Raw SQL, because the current model has columns an earlier
+    /// schema lacks (the stored latest-visit date and search text), so EF Core cannot insert into that schema.
+    /// </summary>
+    public static void AddEarlierClient(ClinicDbContext db, string code, string name)
+    {
+        ArgumentNullException.ThrowIfNull(db);
+        var version = Guid.NewGuid().ToString().ToUpperInvariant();
+        var now = DateTime.UtcNow.ToString("yyyy-MM-dd HH:mm:ss.FFFFFFF", System.Globalization.CultureInfo.InvariantCulture);
+        db.Database.ExecuteSql($"INSERT INTO Clients (Code, Name, IsDemo, Version, CreatedUtc, UpdatedUtc) VALUES ({code}, {name}, 0, {version}, {now}, {now})");
+    }
+
     public static ClinicDbContext Context(string folder)
     {
         var builder = new DbContextOptionsBuilder<ClinicDbContext>();

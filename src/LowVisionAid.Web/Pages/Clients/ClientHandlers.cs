@@ -18,12 +18,7 @@ public sealed class ClientListHandler(ClinicDbContext db)
 
     public async Task<ListPage<ClientRow>> HandleAsync(string? search, int page, CancellationToken ct)
     {
-        var query = db.Clients.AsNoTracking();
-        if (!string.IsNullOrWhiteSpace(search))
-        {
-            var pattern = ClientSearch.ContainsPattern(search);
-            query = query.Where(c => EF.Functions.Like(c.SearchText, pattern, "\\"));
-        }
+        var query = string.IsNullOrWhiteSpace(search) ? db.Clients.AsNoTracking() : ClientSearch.Matching(db, search).AsNoTracking();
 
         return await ListPage.ReadAsync(query
             .OrderByDescending(c => c.LastVisitDate).ThenBy(c => c.Code)

@@ -24,6 +24,8 @@ public sealed partial class ClientListTests
     [InlineData("a-0003", "A-0003")]
     [InlineData("0003", "A-0003")]
     [InlineData("  orm  ", "A-0003")]
+    [InlineData("LS", "A-0003")]
+    [InlineData("mü", "A-0002")]
     public async Task A_search_finds_any_part_of_a_code_or_name_ignoring_case_and_accents(string typed, string expected)
     {
         // Arrange: invented clients.
@@ -43,6 +45,35 @@ public sealed partial class ClientListTests
 
         // Assert
         Assert.Equal([expected], Codes(html));
+    }
+
+    [Fact]
+    public async Task A_changed_name_is_found_by_the_new_name_and_no_longer_by_the_old_and_an_erased_client_not_at_all()
+    {
+        // Arrange
+        using var app = new ClinicApp();
+        var id = await app.ClientAsync("R-0001");
+        var gone = await app.ClientAsync("R-0002");
+        await app.WithDbAsync(async db =>
+        {
+            (await db.Clients.SingleAsync(c => c.Id == id)).Name = "Oskar Fenwright";
+            (await db.Clients.SingleAsync(c => c.Id == gone)).Name = "Oskar Fenmoor";
+            await db.SaveChangesAsync();
+        });
+        using var browser = app.Browser();
+        Assert.Equal(["R-0001", "R-0002"], Codes(await browser.GetStringAsync(new Uri("/Clients?q=oskar%20fen", UriKind.Relative))).Order());
+
+        // Act
+        await app.WithDbAsync(async db =>
+        {
+            (await db.Clients.SingleAsync(c => c.Id == id)).Name = "Oskar Wendell";
+            db.Clients.Remove(await db.Clients.SingleAsync(c => c.Id == gone));
+            await db.SaveChangesAsync();
+        });
+
+        // Assert
+        Assert.Empty(Codes(await browser.GetStringAsync(new Uri("/Clients?q=oskar%20fen", UriKind.Relative))));
+        Assert.Equal(["R-0001"], Codes(await browser.GetStringAsync(new Uri("/Clients?q=wendell", UriKind.Relative))));
     }
 
     [Theory]

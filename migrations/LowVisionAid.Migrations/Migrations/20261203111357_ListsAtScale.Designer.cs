@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace LowVisionAid.Migrations.Migrations
 {
     [DbContext(typeof(ClinicDbContext))]
-    [Migration("20261203104231_ListsAtScale")]
+    [Migration("20261203111357_ListsAtScale")]
     partial class ListsAtScale
     {
         /// <inheritdoc />
@@ -111,8 +111,8 @@ namespace LowVisionAid.Migrations.Migrations
 
                     b.HasIndex("Name");
 
-                    b.HasIndex("LastVisitDate", "Code")
-                        .IsDescending(true, false);
+                    b.HasIndex("LastVisitDate", "Code", "SearchText")
+                        .IsDescending(true, false, false);
 
                     b.ToTable("Clients");
                 });
