@@ -2,7 +2,8 @@ using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using LowVisionAid.Optics.Quantities;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Optics.Planning;
+using LowVisionAid.Web.Plans;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Demo;
@@ -11,7 +12,7 @@ namespace LowVisionAid.Web.Demo;
 /// An invented clinic, so that a newcomer lands in a working app. Every person and figure here is made up;
 /// the records are marked as demo and Settings removes them.
 /// </summary>
-public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanHandler makePlan, ChoosePlanOptionHandler choose)
+public sealed class DemoClinic(ClinicDbContext db, Infrastructure.ClinicCalendar calendar, MakePlanHandler makePlan, ChoosePlanOptionHandler choose)
 {
     public const string ClinicName = "Harbour Lane Low Vision Clinic (demo)";
 
@@ -23,7 +24,7 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
             return false;
         }
 
-        var today = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        var today = calendar.Today;
         db.Settings.Add(DefaultSettings(ClinicName, hasDemoData: true));
         db.KitDevices.AddRange(Kit());
         db.Clients.AddRange(Clients(today));
@@ -79,8 +80,8 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
             }
 
             var outputs = await db.Plans.Where(x => x.Id == planIds[p]).Select(x => x.OutputsJson).SingleAsync(ct).ConfigureAwait(false);
-            var snapshot = PlanJson.Read<PlanSnapshot>(outputs);
-            for (var g = 0; g < snapshot.Goals.Count; g++)
+            var snapshot = PlanJson.Read<TypedPlan>(outputs);
+            for (var g = 0; g < snapshot.Goals.Length; g++)
             {
                 if (DemoChoice(snapshot.Goals[g], g, preferKit: p == 0 ? "HM-12L" : null) is { } choice)
                 {
@@ -90,21 +91,21 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
         }
     }
 
-    private static PlanOptionRef? DemoChoice(GoalPlan goal, int g, string? preferKit)
+    private static PlanOptionRef? DemoChoice(PlannedGoal goal, int g, string? preferKit)
     {
         var kit = goal.KitDevices.Select((o, i) => (o, i)).ToList();
-        if (preferKit is not null && kit.FindIndex(x => x.o.KitCode == preferKit) is var k and >= 0)
+        if (preferKit is not null && kit.FindIndex(x => x.o.Option.KitDeviceId == preferKit) is var k and >= 0)
         {
             return new PlanOptionRef(g, PlanOptionList.KitDevices, k);
         }
 
-        if (kit.FindIndex(x => x.o.Usable) is var usableKit and >= 0)
+        if (kit.FindIndex(x => OptionUse.IsUsable(x.o.Option)) is var usableKit and >= 0)
         {
             return new PlanOptionRef(g, PlanOptionList.KitDevices, usableKit);
         }
 
         var options = goal.Options.Select((o, i) => (o, i)).ToList();
-        return options.FindIndex(x => x.o.Usable) is var usable and >= 0 ? new PlanOptionRef(g, PlanOptionList.Options, usable) : null;
+        return options.FindIndex(x => OptionUse.IsUsable(x.o.Option)) is var usable and >= 0 ? new PlanOptionRef(g, PlanOptionList.Options, usable) : null;
     }
 
     /// <summary>Removes every demo record and gives the clinic a neutral name until the user sets its own.</summary>

@@ -22,6 +22,7 @@ internal static class ClinicDataSetup
         var connectionString = ClinicDatabase.ConnectionStringFor(folder);
 
         builder.Services.AddSingleton(TimeProvider.System);
+        builder.Services.AddSingleton(sp => ClinicCalendar.From(sp.GetRequiredService<IConfiguration>(), sp.GetRequiredService<TimeProvider>()));
         builder.Services.AddDbContext<ClinicDbContext>(options => options.UseClinicSqlite(connectionString));
         builder.Services.AddScoped<DemoClinic>();
         return builder;

@@ -6,11 +6,11 @@ namespace LowVisionAid.Web.Pages.FollowUps;
 public sealed record FollowUpRow(int TrialId, Guid Version, int ClientId, string ClientCode, int PlanId, string Device, DateOnly Due, string Status);
 
 /// <summary>Follow-ups booked and not yet done, earliest first, each marked overdue, due today or upcoming.</summary>
-public sealed class FollowUpListHandler(ClinicDbContext db, TimeProvider clock)
+public sealed class FollowUpListHandler(ClinicDbContext db, Infrastructure.ClinicCalendar calendar)
 {
     public async Task<IReadOnlyList<FollowUpRow>> HandleAsync(CancellationToken ct)
     {
-        var today = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        var today = calendar.Today;
         var rows = await db.Trials.AsNoTracking()
             .Where(t => t.FollowUpDue != null && t.FollowUpDone == null)
             .OrderBy(t => t.FollowUpDue).ThenBy(t => t.Id)
@@ -23,7 +23,7 @@ public sealed class FollowUpListHandler(ClinicDbContext db, TimeProvider clock)
         due < today ? "Overdue" : due == today ? "Due today" : "Upcoming";
 }
 
-public sealed class FollowUpDoneHandler(ClinicDbContext db, TimeProvider clock)
+public sealed class FollowUpDoneHandler(ClinicDbContext db, Infrastructure.ClinicCalendar calendar)
 {
     /// <summary>Marks the follow-up done; false when the trial is gone or someone changed it meanwhile.</summary>
     public async Task<bool> HandleAsync(int trialId, Guid version, CancellationToken ct)
@@ -34,7 +34,7 @@ public sealed class FollowUpDoneHandler(ClinicDbContext db, TimeProvider clock)
             return false;
         }
 
-        trial.FollowUpDone = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        trial.FollowUpDone = calendar.Today;
         try
         {
             await db.SaveChangesAsync(ct).ConfigureAwait(false);

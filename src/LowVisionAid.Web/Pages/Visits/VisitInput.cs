@@ -103,12 +103,12 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
     /// <summary>The largest amplitude of accommodation the core accepts as measured.</summary>
     public const double MaximumAmplitude = 30;
 
-    public VisitInputValidator(TimeProvider clock)
+    public VisitInputValidator(Infrastructure.ClinicCalendar calendar)
     {
-        ArgumentNullException.ThrowIfNull(clock);
+        ArgumentNullException.ThrowIfNull(calendar);
         RuleFor(v => v.VisitDate)
             .Must(d => VisitInput.TryDate(d, out _)).WithMessage("Type the visit date as year-month-day, such as 2026-03-14.")
-            .Must(d => !VisitInput.TryDate(d, out var date) || date <= DateOnly.FromDateTime(clock.GetLocalNow().DateTime).AddDays(1))
+            .Must(d => !VisitInput.TryDate(d, out var date) || date <= calendar.Today.AddDays(1))
             .WithMessage("The visit date is in the future; type the date the client was seen, such as today's.");
         RuleFor(v => v.Practitioner).MaximumLength(FieldLimits.Name).WithMessage($"Keep the practitioner's name to {FieldLimits.Name} characters or fewer.");
 

@@ -1,7 +1,7 @@
 using System.Net;
 using System.Text.Encodings.Web;
 using LowVisionAid.Optics.Planning;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 

@@ -85,8 +85,8 @@ public sealed partial class PlanReportPagesTests
 
         // The engine's count as the plan stored it, and the derived check value (22, see the class notes).
         var stored = await app.WithDbAsync(db => db.Plans.Where(p => p.Id == planId).Select(p => p.OutputsJson).SingleAsync());
-        var kit = Web.Pages.Plans.PlanJson.Read<Web.Pages.Plans.PlanSnapshot>(stored).Goals[0].KitDevices.Single(o => o.KitCode == "HM-08");
-        var counted = int.Parse(kit.Figures.Single(f => f.Label == "Letters in view").Value, CultureInfo.InvariantCulture);
+        var kit = Web.Plans.PlanJson.Read<Web.Plans.TypedPlan>(stored).Goals[0].KitDevices.Single(o => o.Option.KitDeviceId == "HM-08");
+        var counted = (int)Math.Round(kit.Option.CharactersInView!.Value);
         Assert.Equal(22, counted);
         Assert.Contains(Normalise(HandoutWording.ViewText(counted, "3.5 cm (1.4 inches)", drawn: true)), pdf.Text, StringComparison.Ordinal);
         double target = ClientHandoutRenderer.PointsFor(Optics.Quantities.PrintSize.FromM(1.0));
@@ -373,7 +373,7 @@ public sealed partial class PlanReportPagesTests
     [GeneratedRegex("<svg class=\"check-word\"[^>]*><text [^>]*font-size=\"([0-9.]+)\"[^>]*>([^<]*)</text>")]
     private static partial Regex CheckWords();
 
-    [GeneratedRegex("<article class=\"option\".*?</article>", RegexOptions.Singleline)]
+    [GeneratedRegex("<details class=\"option\".*?</details>", RegexOptions.Singleline)]
     private static partial Regex Cards();
 
     [GeneratedRegex("<form [^>]*action=\"([^\"]*)\"")]

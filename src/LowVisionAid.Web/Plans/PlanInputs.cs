@@ -8,7 +8,7 @@ using CoreKitDevice = LowVisionAid.Optics.Kit.KitDevice;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using KitLabel = LowVisionAid.Optics.Kit.KitLabel;
 
-namespace LowVisionAid.Web.Pages.Plans;
+namespace LowVisionAid.Web.Plans;
 
 /// <summary>
 /// Everything a saved plan was made from, in plain numbers (metres, dioptres, logMAR, M), so it serialises exactly
