@@ -73,6 +73,7 @@ public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, App
         await Assertions.Expect(Page.GetByRole(AriaRole.Alert)).ToContainTextAsync(ReportMessages.NoChosenOption);
 
         await plan.GotoAsync(3);
+        await plan.OpenAsync("(HM-20L)");
         await plan.Choose("(HM-20L)").First.ClickAsync();
         await Assertions.Expect(plan.Option("(HM-20L)").First).ToContainTextAsync("Chosen for the handout.");
         var download = await Page.RunAndWaitForDownloadAsync(() => plan.HandoutLink.ClickAsync());

@@ -177,7 +177,7 @@ public sealed class DemoClinic(ClinicDbContext db, Infrastructure.ClinicCalendar
         var first = new Client { Code = "DEMO-01", Name = "Ines Example", YearOfBirth = 1941, Notes = "Invented demo client. Dry macular degeneration, both eyes.", IsDemo = true };
         first.Visits.Add(Visit(today.AddDays(-21), "Demo practitioner A", ("6/60", Acuity.FromSnellen(6, 60)), ("6/48", Acuity.FromSnellen(6, 48)), ("6/48", Acuity.FromSnellen(6, 48)),
             ("4M", PrintSize.FromM(4)), ("40 cm", Distance.FromCentimetres(40)), "+2.50", 2.5, "1.20 logCS", 1.2, "25 cm", 25,
-            (GoalTask.Newspaper, "Local weekly paper", "1M", 1.0), (GoalTask.MedicationLabels, null, "0.8M", 0.8)));
+            (GoalTask.Newspaper, "Local weekly paper", "1M", 1.0), (GoalTask.MedicationLabels, null, "0.8M", 0.8), (GoalTask.Mail, "Bills", "1M", 1.0)));
 
         var second = new Client { Code = "DEMO-02", YearOfBirth = 1958, Notes = "Invented demo client. Recorded without a name, as the clinic allows.", IsDemo = true };
         second.Visits.Add(Visit(today.AddDays(-7), "Demo practitioner B", ("20/200", Acuity.FromSnellen(20, 200)), ("20/400", Acuity.FromSnellen(20, 400)), ("20/200", Acuity.FromSnellen(20, 200)),

@@ -161,8 +161,18 @@ public static class PlanText
 
     public static string YesNo(bool value) => value ? "Yes" : "No";
 
-    /// <summary>"Yes" when the option can be used as planned, otherwise the core's reason why not.</summary>
-    public static string Practical(MagnifierOption option) => OptionUse.WhyNot(option) ?? "Yes";
+    /// <summary>
+    /// "Yes", or "No" with the rule it fails in a few words, for a comparison table; the option's notes give the full
+    /// reason.
+    /// </summary>
+    public static string PracticalInBrief(MagnifierOption option)
+    {
+        ArgumentNullException.ThrowIfNull(option);
+        return OptionUse.IsUsable(option) ? "Yes"
+            : !option.IsApplicable ? "No: cannot be used as planned"
+            : !option.MeetsRequiredPower ? "No: too little power"
+            : "No: impractical form";
+    }
 
     public static string Reason(RankingReason reason) => (reason.InFavour ? "For: " : "Against: ") + reason.Text;
 
