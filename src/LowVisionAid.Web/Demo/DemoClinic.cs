@@ -1,8 +1,8 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using LowVisionAid.Optics.Quantities;
-using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Plans;
 using Microsoft.EntityFrameworkCore;
 

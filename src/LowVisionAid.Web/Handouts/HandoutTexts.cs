@@ -13,6 +13,8 @@ internal static class HandoutTexts
         OptionKind.NearTelescope => "A small telescope for reading, fitted to glasses. It lets you read from a little further away.",
         OptionKind.DistanceTelescope => "A small telescope for seeing things far away, such as a television or a sign.",
         OptionKind.VideoMagnifier => "A camera and screen that show the page bigger, brighter and with stronger contrast.",
+        OptionKind.SpectacleTelescope => "A small telescope fitted to glasses for seeing things far away, such as a television or a board, with your hands free.",
+        OptionKind.ScreenMagnification => "The bigger-text and zoom settings already in your phone, tablet or computer.",
         _ => "A way to make print easier to see, chosen with you at the clinic.",
     };
 
@@ -47,6 +49,16 @@ internal static class HandoutTexts
             "Sit down, then hold the telescope to your eye.",
             "Turn the focus until what you look at is clear.",
         ],
+        OptionKind.SpectacleTelescope =>
+        [
+            "Sit down, put the glasses on and look through the telescope at what you want to see.",
+            "Look under the telescope, or take the glasses off, before you move about.",
+        ],
+        OptionKind.ScreenMagnification =>
+        [
+            "Open the display or accessibility settings and turn the text size or zoom up to the amount shown below.",
+            "If the screen is hard to see, try the setting for light letters on a dark background.",
+        ],
         OptionKind.VideoMagnifier =>
         [
             "Switch it on and put the page under the camera or in front of it.",
@@ -65,7 +77,8 @@ internal static class HandoutTexts
         OptionKind.HandMagnifier => "Lens to page",
         OptionKind.StandMagnifier => "Lens to page (set by the stand)",
         OptionKind.VideoMagnifier => "Eye to screen",
-        OptionKind.DistanceTelescope => "Eye to what you look at",
+        OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope => "Eye to what you look at",
+        OptionKind.ScreenMagnification => "Eye to screen",
         _ => "Eye to page",
     };
 

@@ -14,9 +14,6 @@ public static class PlanBuilder
         {
             MethodVersion = Planner.MethodVersion,
             Imperial = inputs.Imperial,
-            AssumedViewingDistance = inputs.Goals.Any(g => PlanInputs.TaskFor(g.Task) == ReadingTask.DistanceViewing)
-                ? Distance.FromMetres(PlanInputs.AssumedDistanceViewingMetres)
-                : null,
             HasReadingSpeeds = inputs.ReadingSpeeds.Count > 0,
             KitNames = inputs.Kit.ToDictionary(k => k.Code, k => k.Name, StringComparer.Ordinal).ToImmutableDictionary(StringComparer.Ordinal),
             Goals = [.. inputs.Goals.Select(g => Goal(inputs, g))],
@@ -34,7 +31,7 @@ public static class PlanBuilder
             TargetPrint = goal.TargetM is { } m ? PrintSize.FromM(m) : null,
             GoalAcuity = goal.GoalLogMar is { } g ? Acuity.FromLogMar(g) : null,
             PlannedAs = request.Task,
-            Reserve = request.Task == ReadingTask.DistanceViewing ? null : request.Estimates.Reserve ?? EstimateInputs.DefaultReserveFor(request.Task),
+            AssumedViewingDistance = request.Task == ReadingTask.DistanceViewing && goal.ViewingDistanceMetres is null ? request.PreferredDistance : null,
         };
         var problems = Planner.Check(request);
         if (!problems.IsEmpty)
@@ -44,15 +41,18 @@ public static class PlanBuilder
 
         var result = Planner.Build(request);
         var estimates = result.Estimates?.Estimates ?? [];
+        var invariant = System.Globalization.CultureInfo.InvariantCulture;
         return planned with
         {
+            Reserve = result.Reserve,
             RequiredPower = result.RequiredPower,
             RequiredPowerFrom = result.RequiredPowerFrom,
             Estimates = [.. estimates.Select(PlannedEstimate.From)],
+            ReferenceEstimates = result.Estimates is { } r ? [.. r.ForReference.Select(PlannedEstimate.From)] : [],
             Disagreements = result.Estimates is { } c
-                ? [.. c.Disagreements.Select(d => new PlannedDisagreement(estimates.IndexOf(d.Lower), estimates.IndexOf(d.Higher), d.DifferenceLogUnits,
-                    d.FormatPossibleReasons(System.Globalization.CultureInfo.InvariantCulture)))]
+                ? [.. c.Disagreements.Select(d => new PlannedDisagreement(estimates.IndexOf(d.Lower), estimates.IndexOf(d.Higher), d.DifferenceLogUnits))]
                 : [],
+            PossibleReasons = result.Estimates?.FormatPossibleReasons(invariant) ?? [],
             ReadingCurve = result.ReadingCurve is { } curve ? PlannedReadingCurve.From(curve) : null,
             Options = result.Options,
             KitDevices = result.KitDevices,

@@ -28,9 +28,11 @@ public static class PlanText
         OptionKind.SpectacleAdd => "Reading spectacles (high add)",
         OptionKind.HandMagnifier => "Hand magnifier",
         OptionKind.StandMagnifier => "Stand magnifier",
-        OptionKind.NearTelescope => "Near telescope",
+        OptionKind.NearTelescope => "Near telescope (telemicroscope)",
         OptionKind.VideoMagnifier => "Video magnifier",
-        OptionKind.DistanceTelescope => "Distance telescope",
+        OptionKind.DistanceTelescope => "Hand-held distance telescope",
+        OptionKind.SpectacleTelescope => "Spectacle-mounted distance telescope",
+        OptionKind.ScreenMagnification => "Screen zoom or text size (built in)",
         _ => Spaced(kind.ToString()),
     };
 
@@ -47,10 +49,10 @@ public static class PlanText
 
     public static string Method(PowerMethod method) => method switch
     {
-        PowerMethod.KestenbaumClassic => "Kestenbaum's rule (1M at threshold)",
-        PowerMethod.KestenbaumWithReserve => "Kestenbaum's rule with reserve",
-        PowerMethod.NearAcuity => "Near acuity (equivalent viewing distance)",
-        PowerMethod.CriticalPrintSize => "Reading curve (critical print size)",
+        PowerMethod.KestenbaumClassic => "Kestenbaum's rule as published (1M at threshold, no reserve)",
+        PowerMethod.KestenbaumWithReserve => "Kestenbaum's rule, for the target print and reserve",
+        PowerMethod.NearAcuity => "Near-acuity method (equivalent viewing distance)",
+        PowerMethod.CriticalPrintSize => "Reading-curve method (critical print size)",
         _ => Spaced(method.ToString()),
     };
 
@@ -65,6 +67,8 @@ public static class PlanText
         GoalTask.Television => "Television",
         GoalTask.Faces => "Faces",
         GoalTask.Other => "Other task",
+        GoalTask.Whiteboard => "Whiteboard or board",
+        GoalTask.Signs => "Signs",
         _ => Spaced(task.ToString()),
     };
 
@@ -92,10 +96,25 @@ public static class PlanText
         return name is null ? ratio : $"{ratio} ({name})";
     }
 
+    /// <summary>"Reserve used: 2:1.", the lead of the reserve line (its reason is <see cref="ReserveDecision.Why"/>).</summary>
+    public static string ReserveUsed(ReserveDecision decision)
+    {
+        ArgumentNullException.ThrowIfNull(decision);
+        return $"Reserve used: {decision.Reserve.ToString(null, Invariant)}.";
+    }
+
+    /// <summary>Why the reserve was used, with its source, in the core's words.</summary>
+    public static string ReserveWhy(ReserveDecision decision)
+    {
+        ArgumentNullException.ThrowIfNull(decision);
+        return decision.FormatWhy(Invariant);
+    }
+
     public static string Power(Power p) => p.ToString(null, Invariant);
 
+    /// <summary>A length in cm (mm below 1 cm), or in inches when the clinic shows inches.</summary>
     public static string Length(Distance d, bool imperial) =>
-        imperial ? DistanceNotation.Format(d, Invariant, "in") : DistanceNotation.Format(d, Invariant);
+        imperial ? DistanceNotation.Format(d, Invariant, "in") : DistanceNotation.Format(d, Invariant, d.Abs().Centimetres < 1 ? "mm" : null);
 
     public static string GoalTitle(PlannedGoal goal)
     {
@@ -116,9 +135,9 @@ public static class PlanText
     {
         ArgumentNullException.ThrowIfNull(plan);
         var list = new List<string>();
-        if (plan.AssumedViewingDistance is { } d)
+        foreach (var goal in plan.Goals.Where(g => g.AssumedViewingDistance is not null).DistinctBy(g => g.Task))
         {
-            list.Add($"Television and faces are planned at {Length(d, plan.Imperial)}, an assumed viewing distance; measure the client's own.");
+            list.Add($"{Task(goal.Task)} is planned at {Length(goal.AssumedViewingDistance!.Value, plan.Imperial)}, an assumed viewing distance; measure the client's own.");
         }
 
         if (plan.HasReadingSpeeds)
@@ -141,6 +160,7 @@ public static class PlanText
     public static string Strength(MagnifierOption option) => option switch
     {
         DistanceTelescopeOption t => $"{t.Magnification.ToString("0.#", Invariant)}× telescope",
+        ScreenMagnificationOption z => $"{z.ZoomPercent.ToString("0", Invariant)} % zoom",
         NearTelescopeOption n => $"{n.Magnification.ToString("0.#", Invariant)}× with {Power(n.ReadingCap)} cap",
         LargePrintOption p => PrintSizeNotation.FormatCanonical(p.PrintNeeded) + " print",
         null => throw new ArgumentNullException(nameof(option)),
@@ -171,6 +191,7 @@ public static class PlanText
         return OptionUse.IsUsable(option) ? "Yes"
             : !option.IsApplicable ? "No: cannot be used as planned"
             : !option.MeetsRequiredPower ? "No: too little power"
+            : option.BeyondRange ? "No: beyond what this class of device gives"
             : "No: impractical form";
     }
 
@@ -225,6 +246,16 @@ public static class PlanText
             new("Power needed", Power(o.RequiredPower)),
             new("Power given", Power(o.DeliveredPower) + (o.MeetsRequiredPower ? " (enough)" : " (not enough)")),
         };
+        if (o is DistanceTelescopeOption telescope)
+        {
+            figures.Add(new("Magnification", $"{telescope.Magnification.ToString("0.#", Invariant)}× ({telescope.MagnificationNeeded.ToString("0.#", Invariant)}× needed)"));
+        }
+
+        if (o is ScreenMagnificationOption screen)
+        {
+            figures.Add(new("Zoom or text size", $"{screen.ZoomPercent.ToString("0", Invariant)} % (text about {screen.FontSizePixels.ToString("0", Invariant)} px)"));
+        }
+
         Add(figures, "Lens or add", o.LensPower is { } lens ? Power(lens) : null);
         Add(figures, "Label reads", o.Labels is { } l ? $"{l.Nominal.ToString("0.#", Invariant)}× nominal, {l.Trade.ToString("0.#", Invariant)}× trade (re 25 cm)" : null);
         figures.Add(new("Working distance", Length(o.WorkingDistance, imperial)));
@@ -233,7 +264,7 @@ public static class PlanText
         Add(figures, "Letters in view", LettersInView(o));
         figures.Add(new("Depth of focus", DepthOfFocus(o, imperial)));
         figures.Add(new("Both eyes", o.Binocular.Feasible
-            ? $"Possible (convergence demand {o.Binocular.ConvergenceDemand.ToString("0.#", Invariant)} Δ{(o.Binocular.BaseInPrismRule is { } bi ? $"; base-in prism by rule {bi.ToString("0.#", Invariant)} Δ" : "")})"
+            ? $"Possible (convergence demand {o.Binocular.ConvergenceDemand.ToString("0.#", Invariant)} Δ{(o.Binocular.BaseInPrismEachEye is { } bi ? $"; {bi.ToString("0.#", Invariant)} Δ base-in in each lens (add + 2 each eye), convergence left after the prism {o.Binocular.ResidualConvergence.ToString("0.#", Invariant)} Δ" : "")})"
             : "One eye only"));
         figures.Add(new("Accommodation or add needed", Power(o.AccommodationOrAddNeeded)));
         figures.Add(new("Hands free", YesNo(o.HandsFree)));
@@ -247,11 +278,11 @@ public static class PlanText
         return figures;
     }
 
-    /// <summary>Letters of the target print in view, or null when no lens limits them.</summary>
+    /// <summary>Whole letters of the target print in view (the core's rounding), or null when no lens limits them.</summary>
     public static string? LettersInView(MagnifierOption option)
     {
         ArgumentNullException.ThrowIfNull(option);
-        return option.CharactersInView?.ToString("0", Invariant);
+        return option.LettersInView is { } letters ? (letters >= 1 ? letters.ToString(Invariant) : "Less than one") : null;
     }
 
     public static string EstimateMagnification(PlannedEstimate e, bool imperial)
@@ -264,6 +295,16 @@ public static class PlanText
     {
         ArgumentNullException.ThrowIfNull(e);
         return e.Reserve is { } r ? Reserve(r) : "Built into the reading curve";
+    }
+
+    /// <summary>
+    /// An estimate shown for reference only, outside the comparison, and why (methods §2.6: compare like with like),
+    /// e.g. "For reference, not compared: Kestenbaum's rule as published (1M at threshold, no reserve) gives +10.00 D ...".
+    /// </summary>
+    public static string ForReference(PlannedEstimate e)
+    {
+        ArgumentNullException.ThrowIfNull(e);
+        return $"For reference, not compared: {Method(e.Method)} gives {Power(e.EquivalentPower)} (reserve {EstimateReserve(e)}). It brings 1M print only to threshold, so it is not like for like with the estimates above (methods §2.6).";
     }
 
     public static string LogUnits(double value) => value.ToString("0.00", Invariant);

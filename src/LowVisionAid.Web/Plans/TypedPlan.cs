@@ -27,9 +27,6 @@ public sealed record TypedPlan
     /// <summary>True when the clinic showed lengths in inches when the plan was made.</summary>
     public bool Imperial { get; init; }
 
-    /// <summary>The viewing distance assumed for distance tasks, when the plan has one.</summary>
-    public Distance? AssumedViewingDistance { get; init; }
-
     /// <summary>True when reading speeds were given (they are taken as measured at the near test distance).</summary>
     public bool HasReadingSpeeds { get; init; }
 
@@ -62,8 +59,14 @@ public sealed record PlannedGoal
 
     public required ReadingTask PlannedAs { get; init; }
 
-    /// <summary>The acuity reserve the plan used for this goal.</summary>
-    public AcuityReserve? Reserve { get; init; }
+    /// <summary>
+    /// The viewing distance a distance goal is planned at when none was recorded for it (the task's typical distance,
+    /// <see cref="TaskRules"/>): an assumption the plan states. Null for near goals and for a recorded distance.
+    /// </summary>
+    public Distance? AssumedViewingDistance { get; init; }
+
+    /// <summary>The acuity reserve the plan used for this goal, and why (the core's task rule); null for distance viewing.</summary>
+    public ReserveDecision? Reserve { get; init; }
 
     public ImmutableArray<string> Problems { get; init; } = [];
 
@@ -73,7 +76,14 @@ public sealed record PlannedGoal
 
     public ImmutableArray<PlannedEstimate> Estimates { get; init; } = [];
 
+    /// <summary>Estimates shown for reference only, outside the comparison (Kestenbaum at threshold, 1M at 1:1; methods §2.6).</summary>
+    public ImmutableArray<PlannedEstimate> ReferenceEstimates { get; init; } = [];
+
+    /// <summary>The like-for-like pairs of <see cref="Estimates"/> that disagree by more than 0.2 log units.</summary>
     public ImmutableArray<PlannedDisagreement> Disagreements { get; init; } = [];
+
+    /// <summary>The possible reasons for the disagreements, each once (the core's sentences, invariant culture); empty when they agree.</summary>
+    public ImmutableArray<string> PossibleReasons { get; init; } = [];
 
     public PlannedReadingCurve? ReadingCurve { get; init; }
 
@@ -114,7 +124,7 @@ public sealed record PlannedEstimate(
 }
 
 /// <summary>A pair of estimates (by their index in the goal's estimates) that disagree by more than 0.2 log units.</summary>
-public sealed record PlannedDisagreement(int Lower, int Higher, double DifferenceLogUnits, ImmutableArray<string> PossibleReasons)
+public sealed record PlannedDisagreement(int Lower, int Higher, double DifferenceLogUnits)
 {
     public double PowerRatio => Math.Pow(10, DifferenceLogUnits);
 }

@@ -1,5 +1,6 @@
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Web.Plans;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Plans;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using LabelConvention = LowVisionAid.Optics.Devices.LabelConvention;
@@ -83,7 +84,9 @@ public class TypedPlanTests
     [Fact]
     public void Every_class_of_option_the_core_defines_is_stored_and_read_back()
     {
-        var read = PlanJson.Read<TypedPlan>(PlanJson.Write(PlanBuilder.Build(Inputs())));
+        // A phone goal as well: screen zoom is planned for screen tasks only.
+        var inputs = Inputs() with { Goals = [.. Inputs().Goals, new GoalPoint(GoalTask.Phone, null, "1M", 1.0, null)] };
+        var read = PlanJson.Read<TypedPlan>(PlanJson.Write(PlanBuilder.Build(inputs)));
 
         var kinds = read.Goals.SelectMany(g => g.Options.Concat(g.KitDevices)).Select(o => o.Option.Kind).Distinct().ToHashSet();
 
@@ -101,7 +104,12 @@ public class TypedPlanTests
         // the near threshold 4M at 40 cm for 1M at the fluent 2:1 reserve gives (4/1 × 2)/0.40 = +20 D (derived,
         // Bailey's equivalent viewing distance method). Reading curve aside, the required power is a plain number.
         Assert.Equal(JsonValueKind.Number, goal.GetProperty("RequiredPower").ValueKind);
-        Assert.Equal(2.0, goal.GetProperty("Reserve").GetDouble());
+        // The reserve is stored as the core's decision: the ratio as a number, its level and source by name.
+        var reserve = goal.GetProperty("Reserve");
+        Assert.Equal(2.0, reserve.GetProperty("Reserve").GetDouble());
+        Assert.Equal("Fluent", reserve.GetProperty("Level").GetString());
+        Assert.Equal("TaskDefault", reserve.GetProperty("Source").GetString());
+        Assert.False(reserve.TryGetProperty("Why", out _));
         Assert.Equal(1.0, goal.GetProperty("TargetPrint").GetDouble());
         var near = goal.GetProperty("Estimates").EnumerateArray().Single(e => e.GetProperty("Method").GetString() == "NearAcuity");
         Assert.Equal(20.0, near.GetProperty("EquivalentPower").GetDouble(), 9);
