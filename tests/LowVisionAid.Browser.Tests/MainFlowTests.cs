@@ -156,6 +156,7 @@ public sealed class MainFlowTests(BrowserSession browser, AppServer app) : Brows
         await Assertions.Expect(plan.Heading.Page.GetByText($"the visit of {Shown(flow.VisitDate)}")).ToBeVisibleAsync();
         await Assertions.Expect(plan.Goal(1).GetByRole(AriaRole.Heading, new() { Level = 2 })).ToHaveTextAsync("Goal 1: Newspaper, target 1M");
         await Assertions.Expect(plan.RequiredPower(1)).ToContainTextAsync("20.00 D");
+        await plan.OpenEstimatesAsync(1);
         var estimates = plan.Estimates(1);
         await Assertions.Expect(EstimateRow(estimates, "Near-acuity method (equivalent viewing distance)")).ToContainTextAsync("20.00 D");
         await Assertions.Expect(EstimateRow(estimates, "Near-acuity method (equivalent viewing distance)")).ToContainTextAsync("5 cm");

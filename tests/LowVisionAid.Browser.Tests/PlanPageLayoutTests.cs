@@ -9,11 +9,13 @@ namespace LowVisionAid.Browser.Tests;
 public sealed class PlanPageLayoutTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
 {
     // The display-text layout was about 31,000 px (some 35 screens of 1280 × 800) for a three-goal plan. This bound is a
-    // ratchet, not yet the target of "a few screens": measured 10,131 px on 2026-12-03, of which 2,883 px are the
-    // trade-off figures of the chosen options and 616 px the cautions box. Lower it as the page gets shorter.
+    // ratchet, not yet the target of "a few screens": measured 10,131 px on 2026-12-03 (13 screens), 10,449 px after
+    // the merge with issue 10 (more option classes, the reserve and its reason), then 7,809 px with the trade-off
+    // figures one step away in a disclosure (10 screens). The comparison tables (about 1,000 px each, long "first
+    // reason" cells) and the 616 px cautions box are most of what is left. Lower it as the page gets shorter.
     private const int Width = 1280;
     private const int Height = 800;
-    private const int MostScreens = 13;
+    private const int MostScreens = 10;
 
     [Fact]
     public async Task The_three_goal_demo_plan_fits_in_a_few_screens_at_1280_pixels_with_one_comparison_table_per_goal()
@@ -68,5 +70,6 @@ public sealed class PlanPageLayoutTests(BrowserSession browser, AppServer app) :
         await page.EmulateMediaAsync(new() { Media = Media.Print });
         await Assertions.Expect(option.Locator("table.figures")).ToBeVisibleAsync();
         await Assertions.Expect(plan.Goal(1).Locator("details.estimates table")).ToBeVisibleAsync();
+        await Assertions.Expect(page.Locator("details.trade-offs .trade-off-picture").First).ToBeVisibleAsync();
     }
 }

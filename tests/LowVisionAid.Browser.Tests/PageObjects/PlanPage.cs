@@ -20,6 +20,12 @@ public sealed class PlanPage(IPage page)
     /// <summary>The estimates table of a goal (inside its closed disclosure, so found by its place, not its role).</summary>
     public ILocator Estimates(int line) => Goal(line).Locator("details.estimates table");
 
+    /// <summary>
+    /// Opens a goal's estimates disclosure so its rows can be read by role, without moving the focus (the keyboard flow
+    /// goes on from where it was; opening a disclosure by keyboard is checked in <c>PlanPageLayoutTests</c>).
+    /// </summary>
+    public Task OpenEstimatesAsync(int line) => Goal(line).Locator("details.estimates").EvaluateAsync("d => { d.open = true; }");
+
     /// <summary>The comparison table of a goal: a row per option.</summary>
     public ILocator Comparison(int line) => Goal(line).GetByRole(AriaRole.Table, new() { Name = $"Goal {line} options compared", Exact = false });
 
