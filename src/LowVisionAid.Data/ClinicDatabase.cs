@@ -44,6 +44,7 @@ public static class ClinicDatabase
         ArgumentNullException.ThrowIfNull(db);
         await AccessHistoryUpgrade.AdoptAsync(db, ct).ConfigureAwait(false);
         await db.Database.MigrateAsync(ct).ConfigureAwait(false);
+        await ClientSearch.FillMissingAsync(db, ct).ConfigureAwait(false);
     }
 
     /// <summary>Every migration id a LowVisionAid database may record: this build's, and the earlier separate access history's.</summary>

@@ -5,6 +5,7 @@ using LowVisionAid.Optics.Quantities;
 using Microsoft.AspNetCore.Identity;
 using Microsoft.AspNetCore.Identity.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Query;
 
 namespace LowVisionAid.Data;
 
@@ -58,20 +59,71 @@ public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, T
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {
         StampVersions();
-        return base.SaveChanges(acceptAllChangesOnSuccess);
+        var visits = ChangedVisits();
+        if (visits.Count == 0)
+        {
+            return base.SaveChanges(acceptAllChangesOnSuccess);
+        }
+
+        using var own = Database.CurrentTransaction is null ? Database.BeginTransaction() : null;
+        var saved = base.SaveChanges(acceptAllChangesOnSuccess);
+        LatestVisitOf(visits).ExecuteUpdate(LatestVisitDate);
+        own?.Commit();
+        return saved;
     }
 
-    public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
+    public override async Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
     {
         StampVersions();
-        return base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken);
+        var visits = ChangedVisits();
+        if (visits.Count == 0)
+        {
+            return await base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken).ConfigureAwait(false);
+        }
+
+        var own = Database.CurrentTransaction is null ? await Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false) : null;
+        await using (own)
+        {
+            var saved = await base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken).ConfigureAwait(false);
+            await LatestVisitOf(visits).ExecuteUpdateAsync(LatestVisitDate, cancellationToken).ConfigureAwait(false);
+            if (own is not null)
+            {
+                await own.CommitAsync(cancellationToken).ConfigureAwait(false);
+            }
+
+            return saved;
+        }
     }
+
+    // The visits a save adds, changes or removes, with the client each belonged to before the save (a changed visit
+    // could in principle move to another client: both clients' latest dates are refreshed).
+    private List<(Visit Visit, int? ClientBefore)> ChangedVisits() =>
+    [
+        .. ChangeTracker.Entries<Visit>()
+            .Where(e => e.State is EntityState.Added or EntityState.Modified or EntityState.Deleted)
+            .Select(e => (e.Entity, e.State == EntityState.Added ? (int?)null : (int)e.OriginalValues[nameof(Visit.ClientId)]!)),
+    ];
+
+    // After the save: keys of added visits are known, so every client concerned can be named.
+    private IQueryable<Client> LatestVisitOf(List<(Visit Visit, int? ClientBefore)> visits)
+    {
+        var ids = visits.Select(v => v.Visit.ClientId).Concat(visits.Where(v => v.ClientBefore is not null).Select(v => v.ClientBefore!.Value)).Distinct().ToList();
+        return Clients.Where(c => ids.Contains(c.Id));
+    }
+
+    private void LatestVisitDate(UpdateSettersBuilder<Client> set) =>
+        set.SetProperty(c => c.LastVisitDate, c => Visits.Where(v => v.ClientId == c.Id).Max(v => (DateOnly?)v.VisitDate));
 
     // Every save of a versioned record gives it a new token; EF Core then refuses a save whose original token
     // no longer matches the row, which is how a second editor learns that someone else saved first.
     private void StampVersions()
     {
         var now = _clock.GetUtcNow().UtcDateTime;
+        foreach (var client in ChangeTracker.Entries<Client>().Where(e => e.State is EntityState.Added or EntityState.Modified))
+        {
+            client.Entity.SearchText = ClientSearch.For(client.Entity.Code, client.Entity.Name);
+        }
+
         foreach (var entry in ChangeTracker.Entries<IVersioned>())
         {
             if (entry.State == EntityState.Added)

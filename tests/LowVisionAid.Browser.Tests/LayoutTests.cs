@@ -157,7 +157,7 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
     /// an element that clips it on purpose (the visually hidden text). Every element that scrolls sideways must be
     /// such a region. The document-width check alone misses content cut off by an unlabelled scroller.
     /// </summary>
-    private static async Task AssertNothingRunsOffTheWindowAsync(IPage page, string where)
+    internal static async Task AssertNothingRunsOffTheWindowAsync(IPage page, string where)
     {
         var problems = await page.EvaluateAsync<string[]>(OverflowScript);
         Assert.True(problems.Length == 0, $"{where}: " + string.Join("; ", problems));

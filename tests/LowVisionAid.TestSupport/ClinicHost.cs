@@ -19,6 +19,16 @@ public class ClinicHost : WebApplicationFactory<Program>
 {
     private readonly bool _ownsDataFolder;
 
+    // A test process starts dozens of hosts; each would watch its settings files and content folders with inotify,
+    // and Linux allows 128 inotify instances per user across every process (more than one test project, or another
+    // build, runs at once on a shared machine). Tests never change those files while a host runs: no reload on
+    // change, and the file providers poll instead of taking an instance.
+    static ClinicHost()
+    {
+        Environment.SetEnvironmentVariable("DOTNET_hostBuilder__reloadConfigOnChange", "false");
+        Environment.SetEnvironmentVariable("DOTNET_USE_POLLING_FILE_WATCHER", "true");
+    }
+
     /// <param name="dataFolder">A folder the test owns (kept on dispose), or null for a fresh temp folder deleted on dispose.</param>
     public ClinicHost(string? dataFolder = null)
     {

@@ -75,12 +75,20 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<bool>("IsDemo")
                         .HasColumnType("INTEGER");
 
+                    b.Property<DateOnly?>("LastVisitDate")
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("Name")
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
                     b.Property<string>("Notes")
                         .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("SearchText")
+                        .IsRequired()
+                        .HasMaxLength(241)
                         .HasColumnType("TEXT");
 
                     b.Property<DateTime>("UpdatedUtc")
@@ -100,6 +108,9 @@ namespace LowVisionAid.Migrations.Migrations
 
                     b.HasIndex("Name");
 
+                    b.HasIndex("LastVisitDate", "Code")
+                        .IsDescending(true, false);
+
                     b.ToTable("Clients");
                 });
 
@@ -118,6 +129,11 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<string>("ClinicName")
                         .IsRequired()
                         .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("CostClasses")
+                        .IsRequired()
+                        .HasMaxLength(4000)
                         .HasColumnType("TEXT");
 
                     b.Property<DateTime>("CreatedUtc")
@@ -382,6 +398,9 @@ namespace LowVisionAid.Migrations.Migrations
 
                     b.HasIndex("PlanId");
 
+                    b.HasIndex(new[] { "FollowUpDue", "Id" }, "IX_Trials_OpenFollowUps")
+                        .HasFilter("\"FollowUpDue\" IS NOT NULL AND \"FollowUpDone\" IS NULL");
+
                     b.ToTable("Trials");
                 });
 
@@ -532,6 +551,13 @@ namespace LowVisionAid.Migrations.Migrations
                     b.Property<string>("Task")
                         .IsRequired()
                         .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double?>("ViewingDistance")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("ViewingDistanceText")
+                        .HasMaxLength(60)
                         .HasColumnType("TEXT");
 
                     b.Property<int>("VisitId")

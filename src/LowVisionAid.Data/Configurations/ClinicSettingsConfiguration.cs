@@ -1,3 +1,4 @@
+using LowVisionAid.Data.Conversions;
 using LowVisionAid.Data.Entities;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Metadata.Builders;
@@ -12,5 +13,8 @@ internal sealed class ClinicSettingsConfiguration : IEntityTypeConfiguration<Cli
         builder.Property(s => s.ClinicName).HasMaxLength(FieldLimits.Name);
         builder.Property(s => s.ClinicContact).HasMaxLength(FieldLimits.Notes);
         builder.Property(s => s.Version).IsConcurrencyToken();
+        builder.Property(s => s.CostClasses)
+            .HasConversion(new CostClassesConverter(), CostClassesConverter.Comparer)
+            .HasMaxLength(FieldLimits.Notes);
     }
 }

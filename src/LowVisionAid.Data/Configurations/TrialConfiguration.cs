@@ -13,6 +13,8 @@ internal sealed class TrialConfiguration : IEntityTypeConfiguration<Trial>
         builder.Property(t => t.ClientComment).HasMaxLength(FieldLimits.Notes);
         builder.Property(t => t.Version).IsConcurrencyToken();
         builder.HasIndex(t => t.FollowUpDue);
+        // The follow-ups list (open ones, earliest first): only the open follow-ups are in this index.
+        builder.HasIndex(t => new { t.FollowUpDue, t.Id }, "IX_Trials_OpenFollowUps").HasFilter("\"FollowUpDue\" IS NOT NULL AND \"FollowUpDone\" IS NULL");
         builder.HasOne(t => t.KitDevice).WithMany().HasForeignKey(t => t.KitDeviceId).OnDelete(DeleteBehavior.SetNull);
     }
 }

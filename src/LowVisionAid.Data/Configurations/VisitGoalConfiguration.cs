@@ -10,5 +10,6 @@ internal sealed class VisitGoalConfiguration : IEntityTypeConfiguration<VisitGoa
     {
         builder.Property(g => g.Detail).HasMaxLength(FieldLimits.Name);
         builder.Property(g => g.TargetText).HasMaxLength(FieldLimits.Measurement);
+        builder.Property(g => g.ViewingDistanceText).HasMaxLength(FieldLimits.Measurement);
     }
 }

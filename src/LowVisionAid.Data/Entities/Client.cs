@@ -13,6 +13,15 @@ public sealed class Client : IVersioned
 
     public string? Notes { get; set; }
 
+    /// <summary>
+    /// The date of the client's latest visit, kept by the database context whenever a visit is added, changed or
+    /// removed (so the client list can be ordered by an index instead of by a maximum computed per client).
+    /// </summary>
+    public DateOnly? LastVisitDate { get; set; }
+
+    /// <summary>Code and name folded for searching (<see cref="ClientSearch.Fold"/>), kept by the database context.</summary>
+    public string SearchText { get; set; } = "";
+
     /// <summary>True for the invented demo clinic's records, which Settings can remove.</summary>
     public bool IsDemo { get; set; }
 

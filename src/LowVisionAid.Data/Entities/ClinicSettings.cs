@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Data.Entities;
@@ -28,6 +30,12 @@ public sealed class ClinicSettings : IVersioned
     public double CharacterPitch { get; set; }
 
     public PrintSize HandoutPrintSize { get; set; }
+
+    /// <summary>
+    /// The clinic's cost class for each kind of option where it differs from the optics core's default
+    /// (<see cref="DeviceRanges.Costs"/>); empty when the clinic keeps every default.
+    /// </summary>
+    public IReadOnlyDictionary<OptionKind, CostClass> CostClasses { get; set; } = ImmutableDictionary<OptionKind, CostClass>.Empty;
 
     /// <summary>True while the invented demo clinic's records are loaded.</summary>
     public bool HasDemoData { get; set; }

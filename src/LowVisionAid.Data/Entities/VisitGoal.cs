@@ -27,6 +27,15 @@ public sealed class VisitGoal
     /// <summary>The distance acuity the task needs (distance tasks such as television), e.g. 6/12.</summary>
     public Acuity? TargetAcuity { get; set; }
 
+    /// <summary>The viewing distance as typed, for a distance task (e.g. "8 m" for a whiteboard); null when not recorded.</summary>
+    public string? ViewingDistanceText { get; set; }
+
+    /// <summary>
+    /// The distance the task is seen from (distance tasks only). Null when not recorded: the plan then assumes the
+    /// task's typical distance and says so. Near tasks use the visit's working distance.
+    /// </summary>
+    public Distance? ViewingDistance { get; set; }
+
     /// <summary>Television, faces, whiteboards and signs are seen at a distance; every other task is near work.</summary>
     public static bool IsDistanceTask(GoalTask task) => TaskRules.For(task).Kind == ReadingTask.DistanceViewing;
 }

@@ -116,6 +116,15 @@ public sealed record DeviceRanges
         [OptionKind.VideoMagnifier] = CostClass.High,
     }.ToImmutableDictionary();
 
+    /// <summary>
+    /// These ranges with some cost classes changed (a clinic's own, <see cref="Costs"/>); classes not named keep theirs.
+    /// </summary>
+    public DeviceRanges WithCosts(IEnumerable<KeyValuePair<OptionKind, CostClass>> changes)
+    {
+        ArgumentNullException.ThrowIfNull(changes);
+        return this with { Costs = Costs.SetItems(changes) };
+    }
+
     /// <summary>The cost class of an option class.</summary>
     public CostClass CostOf(OptionKind kind) => Costs.TryGetValue(kind, out var cost) ? cost : CostClass.Medium;
 

@@ -131,6 +131,12 @@ public abstract record MagnifierOption
     /// <summary>False when the power is met only in an impractical form; <see cref="PracticalNote"/> says why.</summary>
     public bool IsPractical { get; init; } = true;
 
+    /// <summary>True when the option can be built, gives the required power and does so in a practical form.</summary>
+    public bool IsUsable => IsApplicable && MeetsRequiredPower && IsPractical;
+
+    /// <summary>True for a device that needs a battery or the mains: a video magnifier or an illuminated magnifier.</summary>
+    public bool IsPowered => Kind == OptionKind.VideoMagnifier || this is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
+
     /// <summary>Why the option is impractical, or null.</summary>
     public string? PracticalNote { get; init; }
 

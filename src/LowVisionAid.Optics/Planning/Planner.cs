@@ -14,7 +14,7 @@ public static class Planner
     /// The version of the methods behind a plan. It changes whenever a formula, a default or a ranking rule changes,
     /// so that a stored plan can be told apart from one built today.
     /// </summary>
-    public const string MethodVersion = "2026.12.2";
+    public const string MethodVersion = "2026.12.3";
 
     /// <summary>What is missing or out of range in a request, each with what to enter instead; empty when it can be planned.</summary>
     public static ImmutableArray<string> Check(PlanRequest request)
@@ -229,7 +229,7 @@ public static class Planner
             Options = ranked,
             KitDevices = kit,
             NotConsidered = ImmutableCollectionsMarshal.AsImmutableArray(notConsidered.ToArray()),
-            Cautions = CautionsFor(request, options, kit, context.AccommodationEstimated, comparison?.HasDisagreement ?? false),
+            Cautions = CautionsFor(request, options, ranked, kit, context.AccommodationEstimated, comparison?.HasDisagreement ?? false),
         };
     }
 
@@ -335,7 +335,7 @@ public static class Planner
         var electronic = false;
         foreach (var o in options)
         {
-            var usable = o.IsApplicable && o.MeetsRequiredPower && o.IsPractical;
+            var usable = o.IsUsable;
             optical |= usable && o.Kind is OptionKind.SpectacleAdd or OptionKind.HandMagnifier or OptionKind.StandMagnifier
                 or OptionKind.NearTelescope or OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.MovingCloser;
             electronic |= usable && o.Kind is OptionKind.VideoMagnifier or OptionKind.ScreenMagnification;
@@ -344,23 +344,39 @@ public static class Planner
         return optical ? null : electronic ? Caution.BeyondOptical : Caution.BeyondEveryDevice;
     }
 
-    private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> kit, bool accommodationEstimated, bool estimatesDisagree)
+    /// <summary>
+    /// The options a plan puts forward, which the device cautions are about: the usable options (applicable, giving the
+    /// power, practical) in ranked order, up to and including the first that needs no battery or mains. A clinician
+    /// trials the first usable option; a powered one above it is put forward too, together with the plain alternative
+    /// that follows it (common practice). Options ranked lower, or not usable, raise no caution.
+    /// </summary>
+    public static IEnumerable<MagnifierOption> PutForward(IEnumerable<RankedOption> ranked)
+    {
+        ArgumentNullException.ThrowIfNull(ranked);
+        foreach (var option in ranked.Select(r => r.Option).Where(o => o.IsUsable))
+        {
+            yield return option;
+            if (!option.IsPowered)
+            {
+                yield break;
+            }
+        }
+    }
+
+    // Device cautions (a lens, a strong aid, a short distance, a battery) fire only for what the plan puts forward, from
+    // the options and from the kit; the others concern the client, the task or the inputs (docs/formulas.md, SAFETY.md).
+    private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> ranked, ImmutableArray<RankedOption> kit, bool accommodationEstimated, bool estimatesDisagree)
     {
         var anyLens = false;
         var anyStrong = false;
         var anyShort = false;
         var anyPowered = false;
-        foreach (var o in options)
+        foreach (var o in PutForward(ranked).Concat(PutForward(kit)))
         {
-            anyLens |= o.LensPower is not null || o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
+            anyLens |= o.LensPower is not null || o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.NearTelescope;
             anyStrong |= o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.NearTelescope || (o.LensPower is { } p && p.Dioptres >= 4);
             anyShort |= o.WorkingDistance.Metres < 0.25;
-            anyPowered |= o.Kind == OptionKind.VideoMagnifier || o is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
-        }
-
-        foreach (var k in kit)
-        {
-            anyPowered |= k.Option is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
+            anyPowered |= o.IsPowered;
         }
 
         var distance = Ranking.IsDistanceTask(request.Task);
@@ -368,7 +384,7 @@ public static class Planner
         var contrast = request.Constraints.LogContrastSensitivity is { } cs && cs < Ranking.LowContrast
             ? (cs < Ranking.VeryLowContrast ? Caution.VideoOrNonVisual : Caution.LightingAssessment)
             : null;
-        var count = 3 + (beyond is null ? 0 : 1) + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
+        var count = 2 + (beyond is null ? 0 : 1) + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 2 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
         var cautions = new Caution[count];
         var n = 0;
         cautions[n++] = Caution.StartingPoint;
@@ -390,9 +406,9 @@ public static class Planner
         if (anyLens)
         {
             cautions[n++] = Caution.SunlightFire;
+            cautions[n++] = Caution.NeverAtTheSun;
         }
 
-        cautions[n++] = Caution.NeverAtTheSun;
         if (anyStrong)
         {
             cautions[n++] = Caution.NoWalking;

@@ -193,7 +193,7 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
             option.KitDeviceId is not null && !plan.KitNames.ContainsKey(option.KitDeviceId) && trial?.KitDevice?.Name is { } trialName ? trialName : PlanText.Name(option, plan),
             option.Kind,
             PlanText.Kind(option.Kind),
-            PlanText.GoalTitle(goal),
+            PlanText.GoalTitle(goal, plan.Imperial),
             goal.TargetPrint ?? PrintSize.FromM(1.0),
             inputs.NearThresholdM is { } t && t > 0 ? PrintSize.FromM(t) : null,
             goal.Reserve?.Reserve ?? AcuityReserve.Fluent,

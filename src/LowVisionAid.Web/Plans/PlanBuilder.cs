@@ -32,6 +32,7 @@ public static class PlanBuilder
             GoalAcuity = goal.GoalLogMar is { } g ? Acuity.FromLogMar(g) : null,
             PlannedAs = request.Task,
             AssumedViewingDistance = request.Task == ReadingTask.DistanceViewing && goal.ViewingDistanceMetres is null ? request.PreferredDistance : null,
+            ViewingDistance = request.Task == ReadingTask.DistanceViewing && goal.ViewingDistanceMetres is { } seen ? Distance.FromMetres(seen) : null,
         };
         var problems = Planner.Check(request);
         if (!problems.IsEmpty)

@@ -80,7 +80,8 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             SustainedReserve = settings.SustainedReserve.Ratio,
             CharacterPitch = settings.CharacterPitch,
             Imperial = settings.Units == UnitSystem.Imperial,
-            Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalPoint(g.Task, g.Detail, g.TargetText, g.TargetPrint?.M, g.TargetAcuity?.LogMar))],
+            CostClasses = settings.CostClasses.Count > 0 ? settings.CostClasses : null,
+            Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalPoint(g.Task, g.Detail, g.TargetText, g.TargetPrint?.M, g.TargetAcuity?.LogMar, g.ViewingDistance?.Metres))],
             Kit = [.. kit.Select(KitPoint.From)],
         };
     }

@@ -1,6 +1,7 @@
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Accommodation;
 using LowVisionAid.Optics.Devices;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Optics.Requirement;
@@ -56,6 +57,9 @@ public sealed record PlanInputs
 
     public bool Imperial { get; init; }
 
+    /// <summary>The clinic's cost classes where they differ from the core's defaults; null or empty keeps the defaults.</summary>
+    public IReadOnlyDictionary<OptionKind, CostClass>? CostClasses { get; init; }
+
     public IReadOnlyList<GoalPoint> Goals { get; init; } = [];
 
     public IReadOnlyList<KitPoint> Kit { get; init; } = [];
@@ -105,6 +109,7 @@ public sealed record PlanInputs
                     Fluent = Ratio(FluentReserve, AcuityReserve.Fluent),
                     Sustained = Ratio(SustainedReserve, AcuityReserve.Sustained),
                 },
+                Ranges = CostClasses is { Count: > 0 } costs ? PlanSettings.Default.Ranges.WithCosts(costs) : PlanSettings.Default.Ranges,
             },
         };
     }

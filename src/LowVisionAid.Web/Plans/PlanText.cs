@@ -116,10 +116,17 @@ public static class PlanText
     public static string Length(Distance d, bool imperial) =>
         imperial ? DistanceNotation.Format(d, Invariant, "in") : DistanceNotation.Format(d, Invariant, d.Abs().Centimetres < 1 ? "mm" : null);
 
-    public static string GoalTitle(PlannedGoal goal)
+    /// <summary>A distance task's viewing distance in metres or feet ("8 m", "26.2 ft"), as it is measured in a room.</summary>
+    public static string ViewingLength(Distance d, bool imperial) => imperial
+        ? (d.Inches / 12).ToString("0.#", Invariant) + " ft"
+        : d.Metres < 1 ? Length(d, imperial) : d.Metres.ToString("0.##", Invariant) + " m";
+
+    /// <summary>The goal's task and detail, and the viewing distance recorded for a distance goal ("Whiteboard at 8 m").</summary>
+    public static string GoalTitle(PlannedGoal goal, bool imperial)
     {
         ArgumentNullException.ThrowIfNull(goal);
-        return Task(goal.Task) + (goal.Detail is null ? "" : $" ({goal.Detail})");
+        return Task(goal.Task) + (goal.Detail is null ? "" : $" ({goal.Detail})")
+            + (goal.ViewingDistance is { } seen ? $" at {ViewingLength(seen, imperial)}" : "");
     }
 
     public static string RequiredPowerFrom(PlannedGoal goal)
@@ -137,7 +144,7 @@ public static class PlanText
         var list = new List<string>();
         foreach (var goal in plan.Goals.Where(g => g.AssumedViewingDistance is not null).DistinctBy(g => g.Task))
         {
-            list.Add($"{Task(goal.Task)} is planned at {Length(goal.AssumedViewingDistance!.Value, plan.Imperial)}, an assumed viewing distance; measure the client's own.");
+            list.Add($"{Task(goal.Task)} is planned at {ViewingLength(goal.AssumedViewingDistance!.Value, plan.Imperial)}, an assumed viewing distance; measure the client's own.");
         }
 
         if (plan.HasReadingSpeeds)

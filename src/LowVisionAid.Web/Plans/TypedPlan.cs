@@ -65,6 +65,9 @@ public sealed record PlannedGoal
     /// </summary>
     public Distance? AssumedViewingDistance { get; init; }
 
+    /// <summary>The viewing distance recorded for a distance goal (whiteboard at 8 m), which the plan is made for; null otherwise.</summary>
+    public Distance? ViewingDistance { get; init; }
+
     /// <summary>The acuity reserve the plan used for this goal, and why (the core's task rule); null for distance viewing.</summary>
     public ReserveDecision? Reserve { get; init; }
 

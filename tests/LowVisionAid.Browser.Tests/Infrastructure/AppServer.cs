@@ -13,7 +13,7 @@ namespace LowVisionAid.Browser.Tests.Infrastructure;
 /// shares it, so each test makes records with codes of its own and never changes the demo clinic's. A class that
 /// still declares <c>IClassFixture&lt;AppServer&gt;</c> gets a server of its own.
 /// </summary>
-public sealed class AppServer : ClinicHost
+public class AppServer : ClinicHost
 {
     private Uri? _baseAddress;
 

@@ -22,7 +22,7 @@ public class SavedPlanTests
         Assumptions = PlanText.Assumptions(plan),
         Goals = plan.Goals.Select(g => new
         {
-            Title = PlanText.GoalTitle(g),
+            Title = PlanText.GoalTitle(g, plan.Imperial),
             Target = g.TargetText,
             Task = PlanText.PlannedAs(g.PlannedAs),
             Problems = g.Problems,
@@ -96,13 +96,13 @@ public class SavedPlanTests
         Assert.Equal("application/pdf", summary.Content.Headers.ContentType?.MediaType);
     }
 
-    // A row as the release before the typed plan writes it today (method 2026.12.2, with the reserve fields, the
+    // A row as the release before the typed plan writes it today (method 2026.12.3, with the reserve fields, the
     // reference estimate and the once-listed reasons issue 10 added), written out by hand in that release's shape.
     private const string MainInputsJson =
         """{"VisitId":7,"AgeYears":80,"DistanceLogMar":1,"NearThresholdM":4,"NearTestDistanceMetres":0.4,"ReadingSpeeds":[],"LogContrastSensitivity":1.5,"DimLighting":true,"AddWornDioptres":2.5,"MeasuredAmplitudeDioptres":null,"WorkingDistanceMetres":0.25,"HandsFree":false,"Tremor":false,"UsefulEyes":2,"SpotReserve":1,"FluentReserve":2,"SustainedReserve":3,"CharacterPitch":1.1,"Imperial":false,"Goals":[{"Task":"Newspaper","Detail":null,"TargetText":"1M","TargetM":1,"GoalLogMar":null,"ViewingDistanceMetres":null},{"Task":"Television","Detail":null,"TargetText":"6/12","TargetM":null,"GoalLogMar":0.3,"ViewingDistanceMetres":null}],"Kit":[]}""";
 
     private const string MainOutputsJson =
-        """{"MethodVersion":"2026.12.2","Assumptions":["Television is planned at 300 cm, an assumed viewing distance; measure the client's own."],"Goals":[{"Title":"Newspaper","Target":"1M","Task":"Sustained reading","Problems":[],"RequiredPower":"+20.00 D","RequiredPowerFrom":"From the Near acuity (equivalent viewing distance) estimate.","Estimates":[{"Method":"Kestenbaum's rule with reserve","EquivalentPower":"+20.00 D","ViewingDistance":"5 cm","Magnification":"5.0× (re 25 cm)","Reserve":"2:1","LogUnits":"1.30","Assumptions":[]}],"MethodsDisagree":false,"Disagreements":[],"ReadingCurveNote":null,"Options":[],"KitDevices":[],"NotConsidered":[],"Cautions":[],"Reserve":"2:1","ReserveWhy":"Acuity reserve 2:1, the usual reserve for sustained reading: 2:1 gives fluent reading for most readers.","ReferenceEstimates":[{"Method":"Kestenbaum's rule (1M at threshold)","EquivalentPower":"+10.00 D","ViewingDistance":"10 cm","Magnification":"2.5× (re 25 cm)","Reserve":"1:1","LogUnits":"1.00","Assumptions":[]}],"PossibleReasons":[]}]}""";
+        """{"MethodVersion":"2026.12.3","Assumptions":["Television is planned at 3 m, an assumed viewing distance; measure the client's own."],"Goals":[{"Title":"Newspaper","Target":"1M","Task":"Sustained reading","Problems":[],"RequiredPower":"+20.00 D","RequiredPowerFrom":"From the Near acuity (equivalent viewing distance) estimate.","Estimates":[{"Method":"Kestenbaum's rule with reserve","EquivalentPower":"+20.00 D","ViewingDistance":"5 cm","Magnification":"5.0× (re 25 cm)","Reserve":"2:1","LogUnits":"1.30","Assumptions":[]}],"MethodsDisagree":false,"Disagreements":[],"ReadingCurveNote":null,"Options":[],"KitDevices":[],"NotConsidered":[],"Cautions":[],"Reserve":"2:1","ReserveWhy":"Acuity reserve 2:1, the usual reserve for sustained reading: 2:1 gives fluent reading for most readers.","ReferenceEstimates":[{"Method":"Kestenbaum's rule (1M at threshold)","EquivalentPower":"+10.00 D","ViewingDistance":"10 cm","Magnification":"2.5× (re 25 cm)","Reserve":"1:1","LogUnits":"1.00","Assumptions":[]}],"PossibleReasons":[]}]}""";
 
     [Fact]
     public async Task A_plan_row_as_the_display_text_release_writes_it_today_opens_with_its_reserve_and_prints()
@@ -110,7 +110,7 @@ public class SavedPlanTests
         // Arrange: 6/60 (1.0 logMAR), 4M read at 40 cm, newspaper 1M at 25 cm, and television to 6/12.
         using var app = new ClinicApp();
         using var browser = app.Browser();
-        var planId = await SaveChosenPlanAsync(app, "OLD-2", "2026.12.2", MainInputsJson, MainOutputsJson);
+        var planId = await SaveChosenPlanAsync(app, "OLD-2", "2026.12.3", MainInputsJson, MainOutputsJson);
         Assert.Equal(1, LegacyPlanReader.SchemaOf(MainOutputsJson));
 
         // Act
@@ -124,7 +124,7 @@ public class SavedPlanTests
         Assert.Contains("Reserve used: 2:1.", page, StringComparison.Ordinal);
         Assert.Contains("+20.00 D", page, StringComparison.Ordinal);
         Assert.Contains("For reference, not compared: Kestenbaum's rule as published (1M at threshold, no reserve) gives +10.00 D", page, StringComparison.Ordinal);
-        Assert.Contains("Television is planned at 300 cm, an assumed viewing distance", page, StringComparison.Ordinal);
+        Assert.Contains("Television is planned at 3 m, an assumed viewing distance", page, StringComparison.Ordinal);
         Assert.DoesNotContain("saved by an earlier release", page, StringComparison.Ordinal);
         Assert.Equal("application/pdf", handout.Content.Headers.ContentType?.MediaType);
         Assert.Equal("application/pdf", summary.Content.Headers.ContentType?.MediaType);

@@ -1,4 +1,6 @@
+using FluentValidation;
 using LowVisionAid.Data.Audit;
+using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Identity;
 using Microsoft.AspNetCore.Mvc;
@@ -13,11 +15,24 @@ public sealed class ChangePasswordInput
     public string NewPassword { get; set; } = "";
 }
 
+/// <summary>What a password change needs before Identity checks the current password.</summary>
+public sealed class ChangePasswordInputValidator : AbstractValidator<ChangePasswordInput>
+{
+    public const int MinimumLength = 10;
+
+    public ChangePasswordInputValidator()
+    {
+        RuleFor(i => i.CurrentPassword).NotEmpty().WithMessage("Type your current password.");
+        RuleFor(i => i.NewPassword).MinimumLength(MinimumLength)
+            .WithMessage($"Type a new password of at least {MinimumLength} characters; a short sentence is easy to remember and hard to guess.");
+    }
+}
+
 /// <summary>
 /// The signed-in user changes their own password. Identity gives the account a new security stamp, so every other
 /// session of it (another PC, a copied cookie) ends (<see cref="SessionChecks"/>); this browser is signed in again.
 /// </summary>
-public sealed class ChangePasswordModel(SignInManager<IdentityUser> signIn, UserManager<IdentityUser> users, AuditTrail audit) : PageModel
+public sealed class ChangePasswordModel(SignInManager<IdentityUser> signIn, UserManager<IdentityUser> users, AuditTrail audit, IValidator<ChangePasswordInput> validator) : PageModel
 {
     public const string Changed = "Your password is changed. Any other place where you were signed in is signed out.";
 
@@ -37,17 +52,9 @@ public sealed class ChangePasswordModel(SignInManager<IdentityUser> signIn, User
             return SignInFirst();
         }
 
-        if (string.IsNullOrEmpty(Input.CurrentPassword))
-        {
-            ModelState.AddModelError($"{nameof(Input)}.{nameof(ChangePasswordInput.CurrentPassword)}", "Type your current password.");
-        }
-
-        if (Input.NewPassword.Length < 10)
-        {
-            ModelState.AddModelError($"{nameof(Input)}.{nameof(ChangePasswordInput.NewPassword)}", "Type a new password of at least 10 characters; a short sentence is easy to remember and hard to guess.");
-        }
-
-        if (ModelState.IsValid)
+        var check = await validator.ValidateAsync(Input, ct).ConfigureAwait(false);
+        ModelState.AddErrors(check, nameof(Input));
+        if (check.IsValid)
         {
             var result = await users.ChangePasswordAsync(user, Input.CurrentPassword, Input.NewPassword).ConfigureAwait(false);
             if (result.Succeeded)

@@ -8,7 +8,8 @@ using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Pages.Admin;
 
-public sealed record UserRow(string Id, string UserName, string Roles, bool LockedOut, int FailedTries, bool Disabled)
+/// <param name="IsYou">The account this page is being used with (it cannot disable itself, so it is offered no button).</param>
+public sealed record UserRow(string Id, string UserName, string Roles, bool LockedOut, int FailedTries, bool Disabled, bool IsYou)
 {
     public string State => Disabled ? "Disabled by an administrator" : LockedOut ? "Locked after failed sign-ins" : FailedTries > 0 ? $"{FailedTries} failed tries" : "Active";
 }
@@ -92,10 +93,11 @@ public sealed class UsersModel(UserManager<IdentityUser> users, NewAccountHandle
     {
         var rows = new List<UserRow>();
         var now = clock.GetUtcNow();
+        var you = users.GetUserId(User);
         foreach (var user in await users.Users.OrderBy(u => u.UserName).ToListAsync(ct).ConfigureAwait(false))
         {
             var roles = await users.GetRolesAsync(user).ConfigureAwait(false);
-            rows.Add(new UserRow(user.Id, user.UserName ?? "", string.Join(", ", roles), user.LockoutEnd > now, user.AccessFailedCount, SessionChecks.IsDisabled(user)));
+            rows.Add(new UserRow(user.Id, user.UserName ?? "", string.Join(", ", roles), user.LockoutEnd > now, user.AccessFailedCount, SessionChecks.IsDisabled(user), string.Equals(user.Id, you, StringComparison.Ordinal)));
         }
 
         Accounts = rows;

@@ -1,31 +1,33 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Pages.Clients;
 
 public sealed record ClientRow(int Id, string Code, string? Name, int? YearOfBirth, DateOnly? LastVisit, bool IsDemo);
 
-/// <summary>Clients whose code or name contains the search text, most recently seen first.</summary>
+/// <summary>
+/// Clients whose code or name contains the search text (ignoring case and accents, <see cref="ClientSearch"/>), most
+/// recently seen first, a page at a time. Reads the stored latest-visit date and search text through their indexes,
+/// so the list does not slow with the number of clients and visits.
+/// </summary>
 public sealed class ClientListHandler(ClinicDbContext db)
 {
-    public const int PageSize = 200;
+    public const int PageSize = 50;
 
-    public async Task<IReadOnlyList<ClientRow>> HandleAsync(string? search, CancellationToken ct)
+    public async Task<ListPage<ClientRow>> HandleAsync(string? search, int page, CancellationToken ct)
     {
         var query = db.Clients.AsNoTracking();
         if (!string.IsNullOrWhiteSpace(search))
         {
-            var pattern = "%" + search.Trim().Replace("\\", "\\\\", StringComparison.Ordinal).Replace("%", "\\%", StringComparison.Ordinal).Replace("_", "\\_", StringComparison.Ordinal) + "%";
-            query = query.Where(c => EF.Functions.Like(c.Code, pattern, "\\") || (c.Name != null && EF.Functions.Like(c.Name, pattern, "\\")));
+            var pattern = ClientSearch.ContainsPattern(search);
+            query = query.Where(c => EF.Functions.Like(c.SearchText, pattern, "\\"));
         }
 
-        return await query
-            .Select(c => new { Client = c, LastVisit = c.Visits.Max(v => (DateOnly?)v.VisitDate) })
-            .OrderByDescending(x => x.LastVisit).ThenBy(x => x.Client.Code)
-            .Take(PageSize)
-            .Select(x => new ClientRow(x.Client.Id, x.Client.Code, x.Client.Name, x.Client.YearOfBirth, x.LastVisit, x.Client.IsDemo))
-            .ToListAsync(ct).ConfigureAwait(false);
+        return await ListPage.ReadAsync(query
+            .OrderByDescending(c => c.LastVisitDate).ThenBy(c => c.Code)
+            .Select(c => new ClientRow(c.Id, c.Code, c.Name, c.YearOfBirth, c.LastVisitDate, c.IsDemo)), page, PageSize, ct).ConfigureAwait(false);
     }
 }
 
@@ -132,11 +134,15 @@ public sealed record ClientTrialRow(int Id, int PlanId, DateOnly Date, string De
 
 public sealed record ClientView(
     int Id, string Code, string? Name, int? YearOfBirth, string? Notes, bool IsDemo,
-    IReadOnlyList<ClientVisitRow> Visits, IReadOnlyList<ClientTrialRow> Trials);
+    ListPage<ClientVisitRow> Visits, ListPage<ClientTrialRow> Trials);
 
+/// <summary>A client with one page of their visits and one of their trials, latest first.</summary>
 public sealed class ClientDetailsHandler(ClinicDbContext db)
 {
-    public async Task<ClientView?> HandleAsync(int id, CancellationToken ct)
+    /// <summary>Visits or trials shown at once on a client's page.</summary>
+    public const int PageSize = 20;
+
+    public async Task<ClientView?> HandleAsync(int id, int visitPage, int trialPage, CancellationToken ct)
     {
         var client = await db.Clients.AsNoTracking().FirstOrDefaultAsync(c => c.Id == id, ct).ConfigureAwait(false);
         if (client is null)
@@ -144,14 +150,12 @@ public sealed class ClientDetailsHandler(ClinicDbContext db)
             return null;
         }
 
-        var visits = await db.Visits.AsNoTracking().Where(v => v.ClientId == id)
+        var visits = await ListPage.ReadAsync(db.Visits.AsNoTracking().Where(v => v.ClientId == id)
             .OrderByDescending(v => v.VisitDate).ThenByDescending(v => v.Id)
-            .Select(v => new ClientVisitRow(v.Id, v.VisitDate, v.Practitioner, v.DistanceBothText, v.Plans.Count))
-            .ToListAsync(ct).ConfigureAwait(false);
-        var trials = await db.Trials.AsNoTracking().Where(t => t.Plan!.Visit!.ClientId == id)
+            .Select(v => new ClientVisitRow(v.Id, v.VisitDate, v.Practitioner, v.DistanceBothText, v.Plans.Count)), visitPage, PageSize, ct).ConfigureAwait(false);
+        var trials = await ListPage.ReadAsync(db.Trials.AsNoTracking().Where(t => t.Plan!.Visit!.ClientId == id)
             .OrderByDescending(t => t.TrialDate).ThenByDescending(t => t.Id)
-            .Select(t => new ClientTrialRow(t.Id, t.PlanId, t.TrialDate, t.DeviceDescription, t.Outcome, t.FollowUpDue, t.FollowUpDone))
-            .ToListAsync(ct).ConfigureAwait(false);
+            .Select(t => new ClientTrialRow(t.Id, t.PlanId, t.TrialDate, t.DeviceDescription, t.Outcome, t.FollowUpDue, t.FollowUpDone)), trialPage, PageSize, ct).ConfigureAwait(false);
         return new(client.Id, client.Code, client.Name, client.YearOfBirth, client.Notes, client.IsDemo, visits, trials);
     }
 }

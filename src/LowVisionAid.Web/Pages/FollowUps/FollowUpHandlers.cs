@@ -1,22 +1,24 @@
 using LowVisionAid.Data;
+using LowVisionAid.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Pages.FollowUps;
 
 public sealed record FollowUpRow(int TrialId, Guid Version, int ClientId, string ClientCode, int PlanId, string Device, DateOnly Due, string Status);
 
-/// <summary>Follow-ups booked and not yet done, earliest first, each marked overdue, due today or upcoming.</summary>
+/// <summary>Follow-ups booked and not yet done, earliest first, each marked overdue, due today or upcoming, a page at a time.</summary>
 public sealed class FollowUpListHandler(ClinicDbContext db, Infrastructure.ClinicCalendar calendar)
 {
-    public async Task<IReadOnlyList<FollowUpRow>> HandleAsync(CancellationToken ct)
+    public const int PageSize = 50;
+
+    public async Task<ListPage<FollowUpRow>> HandleAsync(int page, CancellationToken ct)
     {
         var today = calendar.Today;
-        var rows = await db.Trials.AsNoTracking()
+        var rows = await ListPage.ReadAsync(db.Trials.AsNoTracking()
             .Where(t => t.FollowUpDue != null && t.FollowUpDone == null)
             .OrderBy(t => t.FollowUpDue).ThenBy(t => t.Id)
-            .Select(t => new { t.Id, t.Version, t.Plan!.Visit!.ClientId, t.Plan.Visit.Client!.Code, t.PlanId, t.DeviceDescription, Due = t.FollowUpDue!.Value })
-            .ToListAsync(ct).ConfigureAwait(false);
-        return [.. rows.Select(r => new FollowUpRow(r.Id, r.Version, r.ClientId, r.Code, r.PlanId, r.DeviceDescription, r.Due, Status(r.Due, today)))];
+            .Select(t => new { t.Id, t.Version, t.Plan!.Visit!.ClientId, t.Plan.Visit.Client!.Code, t.PlanId, t.DeviceDescription, Due = t.FollowUpDue!.Value }), page, PageSize, ct).ConfigureAwait(false);
+        return new([.. rows.Rows.Select(r => new FollowUpRow(r.Id, r.Version, r.ClientId, r.Code, r.PlanId, r.DeviceDescription, r.Due, Status(r.Due, today)))], rows.Number, rows.HasNext);
     }
 
     internal static string Status(DateOnly due, DateOnly today) =>

@@ -1,3 +1,4 @@
+using LowVisionAid.Web.Infrastructure;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
@@ -7,12 +8,21 @@ public sealed class IndexModel(FollowUpListHandler list, FollowUpDoneHandler don
 {
     public const string ChangedMeanwhile = "That follow-up was changed by someone else just now; the list below is up to date. Check it and try again.";
 
-    public IReadOnlyList<FollowUpRow> FollowUps { get; private set; } = [];
+    [BindProperty(SupportsGet = true, Name = "p")]
+    public int PageNumber { get; set; } = 1;
+
+    public ListPage<FollowUpRow> FollowUps { get; private set; } = new([], 1, false);
+
+    public Pager Pages { get; private set; } = new("Follow-up pages", 1, null, null);
 
     [TempData]
     public string? Message { get; set; }
 
-    public async Task OnGetAsync(CancellationToken ct) => FollowUps = await list.HandleAsync(ct).ConfigureAwait(false);
+    public async Task OnGetAsync(CancellationToken ct)
+    {
+        FollowUps = await list.HandleAsync(PageNumber, ct).ConfigureAwait(false);
+        Pages = Pager.For("Follow-up pages", FollowUps, n => Url.Page("/FollowUps/Index", new { p = n })!);
+    }
 
     public async Task<IActionResult> OnPostDoneAsync(int trialId, Guid version, CancellationToken ct)
     {

@@ -1,5 +1,6 @@
 using FluentValidation;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Web.Infrastructure;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
@@ -30,6 +31,16 @@ public sealed class IndexModel(IValidator<SettingsInput> validator, SettingsHand
 
     public static IReadOnlyList<SelectListItem> SnellenChoices { get; } =
         [new SelectListItem("Metres (6/x)", nameof(SnellenUnit.Metres)), new SelectListItem("Feet (20/x)", nameof(SnellenUnit.Feet))];
+
+    public static IReadOnlyList<SelectListItem> CostChoices { get; } =
+    [
+        new SelectListItem("Low (free or a small outlay)", nameof(CostClass.Low)),
+        new SelectListItem("Medium (a prescription or specialist device)", nameof(CostClass.Medium)),
+        new SelectListItem("High (a custom telescope or an electronic device)", nameof(CostClass.High)),
+    ];
+
+    /// <summary>The label of a kind of option, as the plan shows it.</summary>
+    public static string KindLabel(OptionKind kind) => Web.Plans.PlanText.Kind(kind);
 
     public async Task OnGetAsync(CancellationToken ct)
     {

@@ -1,6 +1,8 @@
+using System.Collections.Immutable;
 using System.Globalization;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Web.Demo;
 using LowVisionAid.Web.Infrastructure;
@@ -39,6 +41,11 @@ public sealed class SettingsHandler(ClinicDbContext db, DemoClinic demo)
             SustainedReserve = s.SustainedReserve.ToString(null, CultureInfo.InvariantCulture),
             CharacterPitch = s.CharacterPitch.ToString("0.0#", CultureInfo.InvariantCulture),
             HandoutPrintSize = s.HandoutPrintSize.ToString(null, CultureInfo.InvariantCulture),
+            Costs = [.. DeviceRanges.Default.Costs.Keys.Order().Select(kind => new CostClassInput
+            {
+                Kind = kind,
+                Cost = s.CostClasses.TryGetValue(kind, out var own) ? own : DeviceRanges.Default.CostOf(kind),
+            })],
             Version = s.Version,
         };
     }
@@ -64,6 +71,15 @@ public sealed class SettingsHandler(ClinicDbContext db, DemoClinic demo)
         s.SustainedReserve = AcuityReserve.FromRatio(SettingsInput.Ratio(input.SustainedReserve)!.Value);
         s.CharacterPitch = SettingsInput.Number(input.CharacterPitch)!.Value;
         s.HandoutPrintSize = Readings.PrintSize(input.HandoutPrintSize).Value;
+        // Only the classes that differ from the core's defaults are kept, so the defaults stay the core's; a kind the
+        // form did not send keeps what it had.
+        var costs = s.CostClasses.ToImmutableDictionary();
+        foreach (var (kind, cost) in input.Costs.Where(c => c.Cost is not null).Select(c => (c.Kind, c.Cost!.Value)))
+        {
+            costs = cost == DeviceRanges.Default.CostOf(kind) ? costs.Remove(kind) : costs.SetItem(kind, cost);
+        }
+
+        s.CostClasses = costs;
         db.Entry(s).State = EntityState.Modified;
         try
         {

@@ -3,6 +3,7 @@ using System.Text.RegularExpressions;
 using FluentValidation;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Web.Infrastructure;
 
@@ -29,6 +30,9 @@ public sealed partial class SettingsInput
 
     public string HandoutPrintSize { get; set; } = "";
 
+    /// <summary>One row per kind of option in the core's cost table (<see cref="DeviceRanges.Costs"/>).</summary>
+    public List<CostClassInput> Costs { get; set; } = [];
+
     public Guid Version { get; set; }
 
     /// <summary>A reserve typed as "2", "2:1" or "2.5 : 1"; null when it is not one.</summary>
@@ -43,6 +47,15 @@ public sealed partial class SettingsInput
 
     [GeneratedRegex(@"^(\d+(?:[.,]\d+)?)\s*(?::\s*1)?$")]
     private static partial Regex RatioPattern();
+}
+
+/// <summary>The cost class the clinic gives one kind of option.</summary>
+public sealed class CostClassInput
+{
+    public OptionKind Kind { get; set; }
+
+    /// <summary>Null when the form did not send it: the kind keeps its class.</summary>
+    public CostClass? Cost { get; set; }
 }
 
 public sealed class SettingsInputValidator : AbstractValidator<SettingsInput>
@@ -65,6 +78,15 @@ public sealed class SettingsInputValidator : AbstractValidator<SettingsInput>
         RuleFor(s => s.CharacterPitch)
             .Must(p => SettingsInput.Number(p) is >= MinimumPitch and <= MaximumPitch)
             .WithMessage("Type the character pitch as a number between 0.5 and 2.0 times the x-height, such as 1.1 for most book faces.");
+        RuleForEach(s => s.Costs).ChildRules(cost =>
+        {
+            cost.RuleFor(c => c.Kind).Must(DeviceRanges.Default.Costs.ContainsKey)
+                .WithMessage("That kind of option has no cost class; reload the settings page and choose again.");
+            cost.RuleFor(c => c.Cost).IsInEnum().WithMessage("Choose low, medium or high cost from the list.");
+        });
+        RuleFor(s => s.Costs)
+            .Must(c => c.Select(x => x.Kind).Distinct().Count() == c.Count)
+            .WithMessage("Each kind of option takes one cost class; reload the settings page and choose again.");
         RuleFor(s => s.HandoutPrintSize).Custom((text, context) =>
         {
             var result = Readings.PrintSize(text ?? "");

@@ -38,6 +38,7 @@ internal static class Understood
             if (goal.IsDistanceTask)
             {
                 Add(rows, $"Goal {i + 1}: acuity wanted", goal.TargetPrint, t => Acuity(Readings.Acuity(t), snellen));
+                Add(rows, $"Goal {i + 1}: viewing distance", goal.ViewingDistance, t => Length(Readings.Distance(t)));
             }
             else
             {

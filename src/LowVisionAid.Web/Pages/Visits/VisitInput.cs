@@ -83,9 +83,13 @@ public sealed class GoalInput
 
     public string? TargetPrint { get; set; }
 
+    /// <summary>The distance a distance task is seen from, such as 8 m for a whiteboard; empty for near tasks.</summary>
+    public string? ViewingDistance { get; set; }
+
     public bool IsDistanceTask => Enum.TryParse<GoalTask>(Task, out var task) && VisitGoal.IsDistanceTask(task);
 
-    public bool IsUsed => !string.IsNullOrWhiteSpace(Task) || !string.IsNullOrWhiteSpace(TargetPrint) || !string.IsNullOrWhiteSpace(Detail);
+    public bool IsUsed => !string.IsNullOrWhiteSpace(Task) || !string.IsNullOrWhiteSpace(TargetPrint) || !string.IsNullOrWhiteSpace(Detail)
+        || !string.IsNullOrWhiteSpace(ViewingDistance);
 }
 
 public sealed class ReadingSpeedInput
@@ -103,6 +107,10 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
 
     /// <summary>The largest amplitude of accommodation the core accepts as measured.</summary>
     public const double MaximumAmplitude = 30;
+
+    /// <summary>Shown when a viewing distance is typed for a near task, whose distance is the visit's working distance.</summary>
+    public const string NearGoalDistance =
+        "A viewing distance is for distance tasks such as television or a whiteboard; a near task uses the preferred working distance above. Clear this field.";
 
     public VisitInputValidator(Infrastructure.ClinicCalendar calendar)
     {
@@ -181,6 +189,20 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
                     : "Type the print size this task needs, such as 1M for newspaper text.");
             goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize).When(g => !g.IsDistanceTask);
             goal.RuleFor(g => g.TargetPrint).Reads(Readings.Acuity).When(g => g.IsDistanceTask);
+            goal.RuleFor(g => g.ViewingDistance).Reads(Readings.Distance);
+            goal.RuleFor(g => g.ViewingDistance)
+                .Must(string.IsNullOrWhiteSpace).When(g => Enum.TryParse<GoalTask>(g.Task, out _) && !g.IsDistanceTask)
+                .WithMessage(NearGoalDistance);
+            goal.RuleFor(g => g.ViewingDistance)
+                .Custom((typed, context) =>
+                {
+                    var goalInput = context.InstanceToValidate;
+                    if (goalInput.IsDistanceTask && !string.IsNullOrWhiteSpace(typed) && Readings.Distance(typed).TryGetValue(out var distance)
+                        && TaskRules.For(Enum.Parse<GoalTask>(goalInput.Task!)).CheckDistance(distance) is { } problem)
+                    {
+                        context.AddFailure(problem);
+                    }
+                });
             goal.RuleFor(g => g.Detail).MaximumLength(FieldLimits.Name).WithMessage($"Keep the task detail to {FieldLimits.Name} characters or fewer.");
         });
 

@@ -37,6 +37,7 @@ internal static class VisitMapping
             var target = Clean(goal.TargetPrint)!;
             var task = Enum.Parse<GoalTask>(goal.Task!);
             var distance = VisitGoal.IsDistanceTask(task);
+            var (viewingText, viewing) = distance ? Read(goal.ViewingDistance, Readings.Distance) : (null, null);
             visit.Goals.Add(new VisitGoal
             {
                 Position = position,
@@ -45,6 +46,8 @@ internal static class VisitMapping
                 TargetText = target,
                 TargetPrint = distance ? null : Readings.PrintSize(target).Value,
                 TargetAcuity = distance ? Readings.Acuity(target).Value : null,
+                ViewingDistanceText = viewingText,
+                ViewingDistance = viewing,
             });
         }
 
@@ -82,7 +85,7 @@ internal static class VisitMapping
         HomeLighting = visit.HomeLighting,
         Notes = visit.Notes,
         Version = visit.Version,
-        Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalInput { Task = g.Task.ToString(), Detail = g.Detail, TargetPrint = g.TargetText })],
+        Goals = [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalInput { Task = g.Task.ToString(), Detail = g.Detail, TargetPrint = g.TargetText, ViewingDistance = g.ViewingDistanceText })],
         ReadingSpeeds = [.. visit.ReadingSpeeds.OrderBy(s => s.Position).Select(s => new ReadingSpeedInput { PrintSize = s.PrintSizeText, WordsPerMinute = s.WordsPerMinute.ToString(CultureInfo.InvariantCulture) })],
     }.WithBlankRows();
 

@@ -1,0 +1,96 @@
+using System.Globalization;
+using System.Text;
+using LowVisionAid.Load;
+
+// The load and scale harness: `bash scripts/load.sh` builds the app in Release and runs `all` (docs/performance.md).
+//   all [--out DIR] [--requests N] [--clients N] [--visits N] [--plans N] [--trials N]
+// Makes DIR/demo (the demo clinic, from an empty folder) and DIR/scale (the demo clinic plus a synthetic clinic),
+// measures start-up and every target at 1, 5 and 20 concurrent clients on each, and writes DIR/results.md.
+var options = Options.Parse(args);
+var culture = CultureInfo.InvariantCulture;
+void Say(string line) => Console.WriteLine(string.Create(culture, $"{DateTime.UtcNow:HH:mm:ss} {line}"));
+
+var root = Options.RepositoryRoot();
+var webDll = Path.Combine(root, "src", "LowVisionAid.Web", "bin", "Release", "net10.0", "LowVisionAid.Web.dll");
+if (!File.Exists(webDll))
+{
+    Console.Error.WriteLine($"Build the app in Release first (dotnet build src/LowVisionAid.Web -c Release): {webDll} is missing.");
+    return 2;
+}
+
+var output = Path.GetFullPath(options.Out, root);
+var demoFolder = Path.Combine(output, "demo");
+var scaleFolder = Path.Combine(output, "scale");
+foreach (var folder in new[] { demoFolder, scaleFolder })
+{
+    if (Directory.Exists(folder))
+    {
+        Directory.Delete(folder, recursive: true);
+    }
+}
+
+var loadBefore = File.ReadAllText("/proc/loadavg").Trim();
+Say($"machine load {loadBefore}");
+
+// The demo clinic: a start on an empty folder (database made, demo loaded), then starts on the existing database.
+TimeSpan emptyStart;
+await using (var first = await AppProcess.StartAsync(webDll, demoFolder, loadDemo: true))
+{
+    emptyStart = first.StartUp;
+}
+
+var demoStarts = new List<TimeSpan>();
+List<CellResult> demo;
+long demoPeak;
+for (var i = 0; ; i++)
+{
+    await using var app = await AppProcess.StartAsync(webDll, demoFolder, loadDemo: true);
+    demoStarts.Add(app.StartUp);
+    if (i < 2)
+    {
+        continue;
+    }
+
+    Say("load on the demo clinic");
+    demo = await LoadRunner.RunAsync(app, Targets.All, [1, 5, 20], options.Requests, Say);
+    demoPeak = app.PeakWorkingSet;
+    break;
+}
+
+// The synthetic clinic on top of a copy of the demo clinic's database.
+Directory.CreateDirectory(scaleFolder);
+foreach (var file in Directory.GetFiles(demoFolder, "lowvisionaid.db*"))
+{
+    File.Copy(file, Path.Combine(scaleFolder, Path.GetFileName(file)));
+}
+
+Say($"adding {options.Size.Clients:N0} clients, {options.Size.Visits:N0} visits, {options.Size.Plans:N0} plans, {options.Size.Trials:N0} trials");
+var generated = await SyntheticClinic.AddAsync(scaleFolder, options.Size, Say);
+var dbBytes = new FileInfo(Path.Combine(scaleFolder, "lowvisionaid.db")).Length;
+Say($"generated in {generated.TotalSeconds:0} s; database {dbBytes / 1048576.0:0} MB");
+
+var scaleStarts = new List<TimeSpan>();
+List<CellResult> scale;
+long scalePeak;
+for (var i = 0; ; i++)
+{
+    await using var app = await AppProcess.StartAsync(webDll, scaleFolder, loadDemo: true);
+    scaleStarts.Add(app.StartUp);
+    if (i < 2)
+    {
+        continue;
+    }
+
+    Say("load on the synthetic clinic");
+    scale = await LoadRunner.RunAsync(app, Targets.All, [1, 5, 20], options.Requests, Say);
+    scalePeak = app.PeakWorkingSet;
+    break;
+}
+
+var loadAfter = File.ReadAllText("/proc/loadavg").Trim();
+var report = Report.Write(options, loadBefore, loadAfter, emptyStart, demoStarts, scaleStarts, generated, dbBytes, demo, scale, demoPeak, scalePeak);
+var resultsFile = Path.Combine(output, "results.md");
+File.WriteAllText(resultsFile, report, Encoding.UTF8);
+Console.WriteLine(report);
+Say($"written to {resultsFile}");
+return demo.Concat(scale).Any(r => r.Errors > 0) ? 1 : 0;
