@@ -28,7 +28,7 @@ public static class HandoutWording
 
     /// <summary>Prompt referral on sudden change (methods.md §7.5).</summary>
     public const string SuddenChange =
-        "See an eye-care practitioner promptly if your sight changes suddenly: for example if straight lines look bent, you see a new dark patch, flashes, floaters or a shadow like a curtain, your eye is painful or red, or you start to see double.";
+        "See an eye-care practitioner promptly if your sight changes suddenly. Signs to act on: straight lines look bent, or you see a new dark patch. Flashes, new floaters, or a shadow like a curtain. An eye that is painful or red. Seeing double.";
 
     /// <summary>Visual hallucinations with sight loss (NICE NG82, methods.md §7.5).</summary>
     public const string SeeingThingsNotThere =
@@ -38,25 +38,58 @@ public static class HandoutWording
     public const string LightOrBattery =
         "If your magnifier has a light or a battery, charge it as its instructions say, and keep plugs and chargers away from water.";
 
+    /// <summary>Printed near the top when the client needs larger print than paper holds.</summary>
+    public const string AskForOtherForm =
+        "You can have this sheet read aloud to you, or as a recording. Ask the clinic, or ask someone you trust to read it with you.";
+
     /// <summary>The line printed at the client's target print size.</summary>
     public const string TargetSizeLine = "Can you read this line? It is the size of text you want to read.";
 
-    /// <summary>The cautions every handout prints, in order.</summary>
+    /// <summary>Every caution, in order: what a handout for an optical magnifier prints.</summary>
     public static IReadOnlyList<string> Cautions { get; } =
         [SunlightFire, NoSunViewing, DoNotMove, DrivingRules, SupportsPractitioner, SuddenChange, SeeingThingsNotThere];
+
+    /// <summary>
+    /// The cautions for these devices, in the order of <see cref="Cautions"/>: the sunlight, sun-viewing and
+    /// do-not-walk cautions only when a device has a lens (not for a video magnifier or large print alone), the
+    /// charging caution when one has a light or battery (a video magnifier always has).
+    /// </summary>
+    /// <param name="devices">The devices the handout describes.</param>
+    public static IReadOnlyList<string> CautionsFor(IEnumerable<HandoutDevice> devices)
+    {
+        ArgumentNullException.ThrowIfNull(devices);
+        var list = devices.ToList();
+        bool lens = list.Exists(d => DeviceWording.HasLens(d.Kind));
+        bool power = list.Exists(d => d.HasLightOrBattery || d.Kind == Optics.Options.OptionKind.VideoMagnifier);
+        return
+        [
+            .. lens ? new[] { SunlightFire, NoSunViewing, DoNotMove } : [],
+            DrivingRules, SupportsPractitioner, SuddenChange, SeeingThingsNotThere,
+            .. power ? new[] { LightOrBattery } : [],
+        ];
+    }
 
     /// <summary>The heading of the to-scale window of what the client sees at once.</summary>
     public const string ViewHeading = "What you see at once";
 
+    /// <summary>The words drawn in the to-scale window, with their spaces: the client sees words, not a run of letters.</summary>
+    public const string ViewPhrase = "read your own post and the news at home with good light on the page and rest when your eyes feel tired ";
+
     /// <summary>
-    /// The window's text equivalent: how many letters fit, across how much of the page, and what the box shows.
+    /// The window's text equivalent in words a client can use: about how many letters of this size are seen at
+    /// once, never a width across the page (with a blind patch in the middle of the sight the width misleads). A
+    /// view of a whole line or more is said as such.
     /// </summary>
-    /// <param name="letters">Letters of the client's print in view.</param>
-    /// <param name="across">The width of the page seen, already formatted (e.g. "3.5 cm (1.4 inches)").</param>
-    /// <param name="drawn">False when the width is too large to draw on the sheet.</param>
-    public static string ViewText(int letters, string across, bool drawn) =>
-        string.Create(CultureInfo.InvariantCulture, $"Through it you see about {letters} {(letters == 1 ? "letter" : "letters")} of your print at once, across {across} of the page.")
+    /// <param name="letters">Letters of the client's print in view, as the plan counted them.</param>
+    /// <param name="drawn">False when the view is too wide to draw on the sheet.</param>
+    public static string ViewText(int letters, bool drawn) =>
+        (letters >= WholeLine
+            ? "Through it you see a whole line of print of this size or more at once."
+            : string.Create(CultureInfo.InvariantCulture, $"Through it you see about {letters} {(letters == 1 ? "letter" : "letters")} of this size at once."))
         + (drawn
-            ? " The box below is that part of the page, drawn to size, with the letters at the size of your print."
-            : " That is wider than this sheet, so it is not drawn here.");
+            ? " The box shows that part of the page at its real size, with letters as big as your print."
+            : string.Empty);
+
+    /// <summary>From this many letters in view the handout says "a whole line" (a newspaper column holds about 35; from memory).</summary>
+    public const int WholeLine = 40;
 }
