@@ -54,6 +54,16 @@ public sealed record ClientHandout(
 
     /// <summary>Largest target print accepted for the check line, in M units.</summary>
     public const double MaximumTargetM = 10;
+
+    /// <summary>The devices the handout describes: every device but those declined at their trial.</summary>
+    public IReadOnlyList<HandoutDevice> DevicesToPrint => [.. Devices.Where(d => d is { TrialDeclined: false })];
+
+    /// <summary>The cautions for <see cref="DevicesToPrint"/> (<see cref="HandoutWording.CautionsFor"/>).</summary>
+    public IReadOnlyList<string> CautionsToPrint => HandoutWording.CautionsFor(DevicesToPrint);
+
+    /// <summary>"Looking after it": <see cref="Care"/>, then the care each class of device printed needs, once each.</summary>
+    public IReadOnlyList<string> CareToPrint =>
+        [.. Care.Concat(DevicesToPrint.Where(d => d.Kind is not null).SelectMany(d => DeviceWording.Care(d.Kind!.Value))).Distinct()];
 }
 
 /// <summary>One chosen device, described for the client.</summary>

@@ -35,7 +35,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
         if (Validate(model) is { } error)
             return ReportResult.Fail(error);
 
-        var devices = model.Devices.Where(d => !d.TrialDeclined).ToList();
+        var devices = model.DevicesToPrint;
         if (devices.Count == 0)
             return ReportResult.Fail(ReportMessages.OnlyDeclinedDevices);
         var notices = model.Devices.Where(d => d.TrialDeclined)
@@ -157,10 +157,10 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
                 }
             }
 
-            Section("Stay safe", HandoutWording.CautionsFor(devices));
+            Section("Stay safe", model.CautionsToPrint);
             Section("Light", model.Light);
             Section("Practice", model.Practice);
-            Section("Looking after it", [.. model.Care.Concat(devices.Where(d => d.Kind is not null).SelectMany(d => DeviceWording.Care(d.Kind!.Value))).Distinct()]);
+            Section("Looking after it", model.CareToPrint);
             Section("If it stops helping", model.IfItStopsHelping);
 
             var checkText = "The line that follows is printed at the size of the print you want to read ("
