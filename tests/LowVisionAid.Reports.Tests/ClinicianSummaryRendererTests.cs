@@ -229,7 +229,9 @@ public class ClinicianSummaryRendererTests
         foreach (var options in new[] { 1, 2, 3, 4 })
         {
             var many = Enumerable.Range(1, options).Select(i => model.ChosenOptions[0] with { Name = "Option " + i.ToString(CultureInfo.InvariantCulture) }).ToList();
-            var text = Read(model with { ChosenOptions = many });
+            var result = Renderer.Render(model with { ChosenOptions = many });
+            Preview.Write("summary-" + options.ToString(CultureInfo.InvariantCulture), result.Content);
+            var text = PdfText.Read(result.Content);
             if (text.PageCount > 1)
                 Assert.True(text.LastPageUsed >= 0.2, $"{options} options: the last page's text reaches only {text.LastPageUsed:P0} down the page");
         }

@@ -206,7 +206,9 @@ public class HandoutForEachClientTests
 
         foreach (var page in text.PageWords.SkipLast(1))
             Assert.False(headings.Any(h => page.EndsWith(h, StringComparison.Ordinal)), $"{name}: a page ends on a heading: …{page[^Math.Min(80, page.Length)..]}");
-        if (text.PageCount > 1)
+        // At 48 pt (a client who needs more than paper holds) a page holds about nine lines and the contact block
+        // alone is taller than that; the clinician is told to offer other forms, so the fill is not checked there.
+        if (text.PageCount > 1 && HandoutPrint.Fit(client.Handout, CultureInfo.InvariantCulture).FitsOnPaper)
             Assert.True(text.LastPageUsed >= 0.25, $"{name}: the last page's text reaches only {text.LastPageUsed:P0} down the page");
     }
 

@@ -59,8 +59,9 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
         double gap = line * 0.25 * spacing;
         var regular = new XFont(HyperlegibleFont.FamilyName, body, XFontStyleEx.Regular);
         var bold = new XFont(HyperlegibleFont.FamilyName, body, XFontStyleEx.Bold);
-        var heading = new XFont(HyperlegibleFont.FamilyName, body * 4 / 3, XFontStyleEx.Bold);
-        var title = new XFont(HyperlegibleFont.FamilyName, body * 5 / 3, XFontStyleEx.Bold);
+        // Headings stand out by weight and a few points; at very large body sizes they grow no more than that.
+        var heading = new XFont(HyperlegibleFont.FamilyName, body + Math.Min(body / 3, 8), XFontStyleEx.Bold);
+        var title = new XFont(HyperlegibleFont.FamilyName, body + Math.Min(body * 2 / 3, 14), XFontStyleEx.Bold);
         (int, double) count;
 
         using (var flow = new PageFlow(document, model.Paper, Margin, body * 2.5, "Client code " + model.ClientCode, regular, pageCount)

@@ -239,7 +239,7 @@ internal sealed partial class PageFlow : IDisposable
         if (usual.Pages == 1 || usual.LastFill >= nearlyEmpty)
             return (1, usual.Pages);
         var tried = new List<(double Spacing, int Pages, double Fill)> { (1, usual.Pages, usual.LastFill) };
-        foreach (var spacing in new[] { 0.3, 1.8, 2.6 })
+        foreach (var spacing in new[] { 0.3, 0.6, 1.4, 1.8, 2.6 })
         {
             var (pages, fill) = layout(spacing);
             tried.Add((spacing, pages, fill));
@@ -262,7 +262,9 @@ internal sealed partial class PageFlow : IDisposable
     {
         double baseline = page.Height.Point - _margin - (_footerHeight * 0.25);
         double rule = baseline - (_footerFont.Size * 1.3);
-        var text = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"Page {number} of {_pageCount ?? 0}") + "  ·  " + _footerText;
+        var pages = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"Page {number} of {_pageCount ?? 0}");
+        // At very large sizes the footer keeps the page number and drops the rest rather than run off the sheet.
+        var text = Measure(pages + "  ·  " + _footerText, _footerFont) <= Width ? pages + "  ·  " + _footerText : pages;
         _tags.BeginArtifact();
         Graphics.DrawLine(new XPen(XColors.Black, 1), _margin, rule, page.Width.Point - _margin, rule);
         Graphics.DrawString(GlyphCoverage.Fit(text), _footerFont, XBrushes.Black, _margin, baseline);
