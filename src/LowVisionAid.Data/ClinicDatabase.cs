@@ -29,7 +29,9 @@ public static class ClinicDatabase
     public static DbContextOptionsBuilder UseClinicSqlite(this DbContextOptionsBuilder options, string connectionString)
     {
         ArgumentNullException.ThrowIfNull(options);
-        return options.UseSqlite(connectionString, sqlite => sqlite.MigrationsAssembly(MigrationsAssembly));
+        // One query per Include chain (EF's default, stated so EF does not warn at each first use): a visit's goals and
+        // reading speeds are a handful of rows, read in one consistent snapshot.
+        return options.UseSqlite(connectionString, sqlite => sqlite.MigrationsAssembly(MigrationsAssembly).UseQuerySplittingBehavior(QuerySplittingBehavior.SingleQuery));
     }
 
     /// <summary>

@@ -37,6 +37,11 @@ public sealed class KitCsvImport
     /// <summary>Every problem found, in file order.</summary>
     public ImmutableArray<KitCsvError> Errors { get; }
 
+    /// <summary>The encoding the file was read as (<see cref="KitCsvText"/>); UTF-8 for text given as text.</summary>
+    public string Encoding { get; private init; } = KitCsvText.Utf8;
+
+    internal KitCsvImport ReadAs(string encoding) => new(Devices, Errors) { Encoding = encoding };
+
     internal static KitCsvImport Ok(ImmutableArray<KitDevice> devices) => new(devices, []);
 
     internal static KitCsvImport Failed(ImmutableArray<KitCsvError> errors) => new([], errors);
@@ -70,12 +75,18 @@ public static class KitCsv
         FormatProvider = CultureInfo.InvariantCulture,
     };
 
+    // CsvHelper's formula guard: text starting with = + - @, a tab or a CR gets an apostrophe (and quotes), so a
+    // spreadsheet shows it as text; numbers are written as numbers and never get one.
     private static readonly CsvWriterOptions WriterOptions = new()
     {
         Separator = ',',
         FormatProvider = CultureInfo.InvariantCulture,
         NewLine = "\n",
+        Injection = CsvInjection.Escape,
     };
+
+    /// <summary>The format of every number written: invariant, at most ten decimals (unit conversions leave no binary noise).</summary>
+    private const string NumberFormat = "0.##########";
 
     private static readonly (string Text, DeviceKind Kind)[] Kinds =
     [
@@ -87,6 +98,18 @@ public static class KitCsv
     [
         ("nominal", LabelConvention.Nominal), ("trade", LabelConvention.Trade), ("nominal-40cm", LabelConvention.Nominal40Centimetres),
     ];
+
+    /// <summary>
+    /// Reads a catalogue file as uploaded: its bytes are decoded as the encoding they are in (<see cref="KitCsvText"/>),
+    /// or the file is refused with the encoding to save it in. Either every row is imported or none is.
+    /// </summary>
+    public static KitCsvImport Import(ReadOnlySpan<byte> file)
+    {
+        var (text, encoding) = KitCsvText.Decode(file);
+        return text is null
+            ? KitCsvImport.Failed([new KitCsvError(1, string.Empty, encoding)])
+            : Import(new StringReader(text)).ReadAs(encoding);
+    }
 
     /// <summary>Reads a catalogue. Either every row is imported or none is.</summary>
     public static KitCsvImport Import(TextReader reader)
@@ -194,24 +217,22 @@ public static class KitCsv
             csv.WriteField(d.Id);
             csv.WriteField(d.Name);
             csv.WriteField(Kinds.First(k => k.Kind == d.Kind).Text);
-            csv.WriteField(Number(d.Power?.Dioptres));
-            csv.WriteField(Number(d.Label?.Times));
+            csv.WriteField(d.Power?.Dioptres, NumberFormat);
+            csv.WriteField(d.Label?.Times, NumberFormat);
             csv.WriteField(d.Label is { } label ? Conventions.First(c => c.Convention == label.Convention).Text : string.Empty);
-            csv.WriteField(Number(d.Aperture?.Millimetres));
-            csv.WriteField(Number(d.StandHeight?.Centimetres));
-            csv.WriteField(Number(d.ImageBelowLens?.Centimetres));
-            csv.WriteField(Number(d.EnlargementRatio));
-            csv.WriteField(Number(d.Magnification));
-            csv.WriteField(Number(d.ReadingCap?.Dioptres));
-            csv.WriteField(Number(d.Field?.Degrees));
-            csv.WriteField(Number(d.FocusNearest?.Metres));
+            csv.WriteField(d.Aperture?.Millimetres, NumberFormat);
+            csv.WriteField(d.StandHeight?.Centimetres, NumberFormat);
+            csv.WriteField(d.ImageBelowLens?.Centimetres, NumberFormat);
+            csv.WriteField(d.EnlargementRatio, NumberFormat);
+            csv.WriteField(d.Magnification, NumberFormat);
+            csv.WriteField(d.ReadingCap?.Dioptres, NumberFormat);
+            csv.WriteField(d.Field?.Degrees, NumberFormat);
+            csv.WriteField(d.FocusNearest?.Metres, NumberFormat);
             csv.WriteField(d.Illuminated ? "yes" : "no");
             csv.WriteField(d.Notes ?? string.Empty);
             csv.EndRecord();
         }
     }
-
-    private static string Number(double? value) => value is { } v ? v.ToString("0.##########", CultureInfo.InvariantCulture) : string.Empty;
 
     private static string ColumnFor(string field) => field switch
     {
@@ -323,7 +344,28 @@ public static class KitCsv
             }
         }
 
-        private string Text(string column) => index.TryGetValue(column, out var i) ? (csv.GetString(i) ?? string.Empty).Trim() : string.Empty;
+        // A control character (NUL, escape, …) is never part of a device's text; line breaks and tabs only in notes.
+        // An apostrophe before a formula character is the export's formula guard, so it is taken off again.
+        private string Text(string column)
+        {
+            if (!index.TryGetValue(column, out var i))
+            {
+                return string.Empty;
+            }
+
+            var text = (csv.GetString(i) ?? string.Empty).Trim();
+            for (var at = 0; at < text.Length; at++)
+            {
+                if (char.IsControl(text[at]) && !(column == "notes" && text[at] is '\r' or '\n' or '\t'))
+                {
+                    Error(column, string.Create(CultureInfo.InvariantCulture,
+                        $"Character {at + 1} is a control character (U+{(int)text[at]:X4}), which cannot be stored; delete it (it often comes from text copied out of another program) and save the file again."));
+                    return string.Empty;
+                }
+            }
+
+            return text.Length >= 2 && text[0] == '\'' && text[1] is '=' or '+' or '-' or '@' ? text[1..] : text;
+        }
 
         private double? Double(string column, string example)
         {

@@ -1,5 +1,6 @@
 using System.Globalization;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Kit;
 using Microsoft.AspNetCore.Mvc.Rendering;
 
@@ -45,6 +46,8 @@ internal static class Labels
         GoalTask.Television => "Television",
         GoalTask.Faces => "Faces",
         GoalTask.Other => "Other task",
+        GoalTask.Whiteboard => "Whiteboard or board",
+        GoalTask.Signs => "Signs",
         _ => task.ToString(),
     };
 

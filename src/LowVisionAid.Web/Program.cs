@@ -4,10 +4,6 @@ using LowVisionAid.Web.Security;
 // `create-admin --user <name>` creates an administrator and exits without starting the server (docs/security.md).
 var adminCommand = AdminCommandLine.Parse(args);
 var builder = WebApplication.CreateBuilder(adminCommand?.HostArgs ?? args);
-if (adminCommand is not null)
-{
-    builder.Logging.SetMinimumLevel(LogLevel.Warning);
-}
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
 if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(builder.Configuration["ASPNETCORE_URLS"]))
@@ -15,10 +11,17 @@ if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(
     builder.WebHost.UseUrls("http://127.0.0.1:5080");
 }
 
-builder.AddClinicData();                    // SQLite file in the data folder, migrations from LowVisionAid.Migrations
-builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers
-builder.Services.AddRazorPages();
-builder.AddClinicSecurity();                // loopback unless Access:AllowLan, sign-in and roles, audit trail, backups
+// A network address without Access:AllowLan: one message on standard error and a non-zero exit, no stack trace.
+if (StartRefusal.Check(builder.Configuration, Console.Error) is { } refused)
+{
+    return refused;
+}
+
+// Settings: appsettings.json lists every one with its default; each concern binds its own section and is checked at start.
+builder.AddClinicLogging(quietConsole: adminCommand is not null);   // Logging:LogLevel, one line per request, rolling file in the data folder
+builder.AddClinicData();                    // DataFolder, BackupFolder, LoadDemoClinic; SQLite, backups, database start-up
+builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers (one list, by feature)
+builder.AddClinicSecurity();                // loopback unless Access:AllowLan, sign-in and roles, cookie keys, audit trail
 
 builder.Services.AddFriendlyErrors();       // ProblemDetails for the API's errors
 builder.Services.AddCalculationApi();       // JSON API for plans and conversions, OpenAPI at /openapi/v1.json
@@ -30,12 +33,10 @@ if (adminCommand is not null)
     return await CreateAdminCommand.RunAsync(app.Services, adminCommand, CreateAdminCommand.ReadFromConsole, askTwice: !Console.IsInputRedirected, Console.Out, Console.Error, CancellationToken.None).ConfigureAwait(false);
 }
 
-await using (await StartUpLock.TakeAsync(app).ConfigureAwait(false))   // one start at a time; frees a migration lock a killed start left
-{
-    await app.PrepareAccessDatabaseAsync().ConfigureAwait(false);    // backup before any migration, then users and audit schema
-    await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // migrate, then the demo clinic on an empty database
-}
+app.LogStarting();
+await app.PrepareClinicDatabaseAsync().ConfigureAwait(false);   // once, under the start-up lock: settings checked, backup, migrate, roles, demo clinic
 
+app.UseRequestLog();                        // outermost: one line per request (method, path without query, status, duration)
 if (!app.Environment.IsDevelopment())
 {
     app.UseExceptionHandler("/Error");

@@ -5,7 +5,7 @@ namespace LowVisionAid.Browser.Tests;
 
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class AccessibilityScanTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class AccessibilityScanTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     [Theory]
     [MemberData(nameof(SitePages.PathsInBothSchemes), MemberType = typeof(SitePages))]

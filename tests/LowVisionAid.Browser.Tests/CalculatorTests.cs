@@ -9,7 +9,7 @@ namespace LowVisionAid.Browser.Tests;
 /// </summary>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class CalculatorTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class CalculatorTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     private const string Sustained = "Sustained reading: books, newspapers, letters";
     private const string SpotReserve = "Spot tasks: print just at the smallest size read (1:1)";

@@ -5,7 +5,7 @@ namespace LowVisionAid.Browser.Tests;
 
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class DisplaySettingsTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class DisplaySettingsTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     [Fact]
     public async Task High_contrast_and_large_text_apply_to_every_page_after_they_are_saved()

@@ -5,7 +5,7 @@ namespace LowVisionAid.Browser.Tests;
 
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class ErrorPageTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class ErrorPageTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     [Theory]
     [InlineData("no-such-page")]

@@ -14,7 +14,7 @@ namespace LowVisionAid.Browser.Tests;
 /// </summary>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class KeyboardMainFlowTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class KeyboardMainFlowTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 

@@ -6,7 +6,7 @@ namespace LowVisionAid.Browser.Tests;
 /// <summary>Keyboard alone: the skip link, a visible focus on everything that takes it, forms sent by keyboard.</summary>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class KeyboardTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class KeyboardTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     private const string FocusIndicatorScript = """
         () => {

@@ -6,7 +6,7 @@ namespace LowVisionAid.Browser.Tests;
 /// <summary>Reflow at 320 CSS px (WCAG 1.4.10) and use at 200% zoom (1.4.4), in both schemes and text sizes.</summary>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class LayoutTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class LayoutTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     [Theory]
     [MemberData(nameof(SitePages.PathsInBothSchemes), MemberType = typeof(SitePages))]

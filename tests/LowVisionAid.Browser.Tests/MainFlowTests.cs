@@ -18,7 +18,7 @@ namespace LowVisionAid.Browser.Tests;
 /// </remarks>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed class MainFlowTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed class MainFlowTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 

@@ -15,6 +15,8 @@ namespace LowVisionAid.Browser.Tests;
 /// labels goal: with the page at the focal point its working distance is 1/F = 1/12 m = 8.3 cm, 3.3 inches
 /// (methods.md §3.1, derived; shown to 0.1), held 25 cm from the eye (the planner's stated default).
 /// </summary>
+// Its own server: choosing an option in the browser changes a demo plan, which the shared server's other classes
+// (the layout and scan tests of plan 3's "nothing chosen yet" page) must find unchanged.
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
 public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>

@@ -10,7 +10,7 @@ namespace LowVisionAid.Browser.Tests;
 /// </summary>
 [Collection(BrowserTestGroup.Name)]
 [Trait("Category", "Browser")]
-public sealed partial class SkipLinkFormTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app), IClassFixture<AppServer>
+public sealed partial class SkipLinkFormTests(BrowserSession browser, AppServer app) : BrowserTest(browser, app)
 {
     [Theory]
     [InlineData("Visits/New?clientId=1", "Input_DistanceRight", "6/0", "Save visit")]

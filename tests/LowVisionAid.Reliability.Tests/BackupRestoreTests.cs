@@ -3,7 +3,6 @@ using LowVisionAid.Data;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Backup;
 using LowVisionAid.Reliability.Tests.Support;
-using LowVisionAid.Web.Security;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
@@ -111,9 +110,9 @@ public sealed class BackupRestoreTests
         await File.WriteAllTextAsync(text, "this is not a database at all, just some text in a file with a .db name");
         var before = DatabaseDump.Read(app.Data.DatabasePath);
 
-        var newerCheck = backups.Restore(newer.Path, Known(app));
-        var otherCheck = backups.Restore(other, Known(app));
-        var textCheck = backups.Restore(text, Known(app));
+        var newerCheck = await backups.RestoreAsync(newer.Path, Known(app), CancellationToken.None);
+        var otherCheck = await backups.RestoreAsync(other, Known(app), CancellationToken.None);
+        var textCheck = await backups.RestoreAsync(text, Known(app), CancellationToken.None);
 
         Assert.False(newerCheck.CanRestore);
         Assert.Contains("newer version", newerCheck.Message, StringComparison.Ordinal);
@@ -171,5 +170,5 @@ public sealed class BackupRestoreTests
     }
 
     private static IReadOnlySet<string> Known(ClinicApp app) =>
-        app.Service(sp => SecuritySetup.KnownMigrations(sp.GetRequiredService<ClinicDbContext>()));
+        app.Service(sp => sp.GetRequiredService<ClinicDbContext>().KnownMigrations());
 }

@@ -7,6 +7,7 @@ using Xunit.Abstractions;
 namespace LowVisionAid.Reliability.Tests;
 
 /// <summary>The real app over loopback with 20 parallel writers, on the same and on different records.</summary>
+[Trait("Category", "Slow")]
 [Collection(RealProcessTests.Name)]
 public sealed class ConcurrencyTests(ITestOutputHelper output) : IAsyncLifetime, IDisposable
 {

@@ -12,6 +12,7 @@ namespace LowVisionAid.Reliability.Tests;
 /// The app as a real process, killed with SIGKILL at random moments while clients are being saved over loopback,
 /// then restarted: every save it acknowledged is there, and SQLite's integrity check passes.
 /// </summary>
+[Trait("Category", "Slow")]
 [Collection(RealProcessTests.Name)]
 public sealed class CrashHarnessTests(ITestOutputHelper output)
 {

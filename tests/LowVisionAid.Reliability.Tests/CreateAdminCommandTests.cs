@@ -18,6 +18,7 @@ public sealed class CreateAdminCommandTests
     private const string Password = "a sentence long enough";
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Run_as_a_process_with_the_password_piped_it_creates_an_administrator_who_can_sign_in_and_exits_without_serving()
     {
         // Arrange
@@ -112,6 +113,7 @@ public sealed class CreateAdminCommandTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Without_a_user_name_it_shows_how_to_run_it_and_exits_with_the_usage_code()
     {
         using var data = new TempFolder("create-admin-usage");

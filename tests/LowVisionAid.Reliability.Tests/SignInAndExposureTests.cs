@@ -1,6 +1,7 @@
 using System.Net;
 using LowVisionAid.Data.Access;
 using LowVisionAid.Reliability.Tests.Support;
+using LowVisionAid.Web.Pages.Account;
 using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Http;
 using Microsoft.AspNetCore.Identity;
@@ -38,14 +39,23 @@ public sealed class SignInAndExposureTests
         Assert.Contains("0.0.0.0", refusal.Message, StringComparison.Ordinal);
     }
 
+    // Run as the real process: the start must end with the one message and a non-zero exit code, not a crash
+    // (an unhandled exception prints a stack trace and ends with SIGABRT, exit code 134). The app never listens here.
     [Fact]
-    public void The_app_itself_refuses_to_start_on_a_network_address_unless_allowed()
+    public async Task The_app_refuses_to_start_on_a_network_address_with_one_clear_message_and_no_stack_trace()
     {
-        using var app = new ClinicApp("lan-refused", settings: new Dictionary<string, string?> { ["urls"] = "http://0.0.0.0:5999" });
+        using var data = new TempFolder("lan-refused");
 
-        var refusal = Assert.ThrowsAny<Exception>(() => app.CreateClient());
+        var (exitCode, output) = await AppProcess.RunToExitAsync(data.Path, ["--urls", "http://0.0.0.0:" + AppProcess.FreeLoopbackPort()], TimeSpan.FromSeconds(90));
 
-        Assert.Contains("Access:AllowLan=true", refusal.ToString(), StringComparison.Ordinal);
+        Assert.NotNull(exitCode);
+        Assert.NotEqual(0, exitCode);
+        Assert.NotEqual(134, exitCode);
+        Assert.Contains("Access:AllowLan=true", output, StringComparison.Ordinal);
+        Assert.Contains("0.0.0.0", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("Unhandled exception", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", output, StringComparison.Ordinal);
+        Assert.Single(output.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
     }
 
     [Fact]
@@ -154,10 +164,47 @@ public sealed class SignInAndExposureTests
         }
 
         using var right = await Accounts.SignInAsync(client, Accounts.AdminName, Accounts.AdminPassword);
-        var body = await right.Content.ReadAsStringAsync();
+        var body = System.Net.WebUtility.HtmlDecode(await right.Content.ReadAsStringAsync());
 
+        // Refused with the one answer every failed sign-in gets, which does not say whether the account exists
         Assert.Equal(HttpStatusCode.OK, right.StatusCode);
-        Assert.Contains("This account is locked", body, StringComparison.Ordinal);
+        Assert.Contains(SignInModel.Refused, body, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task A_made_up_name_and_a_real_account_get_the_same_answer_before_and_after_lockout()
+    {
+        using var app = new ClinicApp("same-answer", settings: Accounts.SignInOn);
+        using (var setup = app.NewClient())
+        {
+            await Accounts.CreateFirstAdministratorAsync(setup);
+        }
+
+        using var client = app.NewClient();
+        var real = new List<string>();
+        var madeUp = new List<string>();
+        for (var i = 0; i < 6; i++)
+        {
+            real.Add(await RefusalAsync(client, Accounts.AdminName, "not the password " + i));
+            madeUp.Add(await RefusalAsync(client, "no.such.person", "not the password " + i));
+        }
+
+        // Every answer, real or made up, before and after the real account locked, is the same sentence
+        Assert.All(real.Concat(madeUp), a => Assert.Equal(SignInModel.Refused, a));
+        Assert.True(await app.ServiceAsync(async sp =>
+        {
+            var users = sp.GetRequiredService<UserManager<IdentityUser>>();
+            return await users.IsLockedOutAsync((await users.FindByNameAsync(Accounts.AdminName))!);
+        }), "The real account should be locked by now, or the test shows nothing about the lockout answer.");
+
+        static async Task<string> RefusalAsync(FormClient client, string name, string password)
+        {
+            using var response = await Accounts.SignInAsync(client, name, password);
+            var body = System.Net.WebUtility.HtmlDecode(await response.Content.ReadAsStringAsync());
+            Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+            var match = System.Text.RegularExpressions.Regex.Match(body, "The user name or password[^<]*");
+            return match.Success ? match.Value.Trim() : "(no refusal on the page)";
+        }
     }
 
     [Fact]

@@ -1,5 +1,7 @@
 using System.Globalization;
+using System.Text.RegularExpressions;
 using Microsoft.Data.Sqlite;
+using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Data.Backup;
 
@@ -16,7 +18,7 @@ public sealed record RestoreCheck(bool CanRestore, string Message, IReadOnlyList
 /// Consistent copies of the live database made while the app runs (SQLite's online backup API), and restore from
 /// such a copy after checking it (integrity check, then schema version against the migrations this build knows).
 /// </summary>
-public sealed class DatabaseBackups(string databasePath, string backupFolder, TimeProvider clock)
+public sealed partial class DatabaseBackups(string databasePath, string backupFolder, TimeProvider clock)
 {
     public const string FilePrefix = "lowvisionaid-";
     public const string FileExtension = ".db";
@@ -49,14 +51,7 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
         var name = string.Create(CultureInfo.InvariantCulture, $"{FilePrefix}{now:yyyyMMdd-HHmmss-fff}-{reason}{FileExtension}");
         var path = Path.Combine(BackupFolder, name);
         var partial = path + ".partial";
-        using (var source = Open(DatabasePath, SqliteOpenMode.ReadOnly))
-        using (var copy = Open(partial, SqliteOpenMode.ReadWriteCreate))
-        {
-            source.BackupDatabase(copy);
-            using var journal = copy.CreateCommand();
-            journal.CommandText = "PRAGMA journal_mode=DELETE";
-            journal.ExecuteNonQuery();
-        }
+        Copy(DatabasePath, partial);
 
         // Only a finished copy gets the real name, so a crash mid-backup never leaves a file that looks complete.
         File.Move(partial, path, overwrite: false);
@@ -76,8 +71,10 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
 
     /// <summary>
     /// Checks that <paramref name="candidatePath"/> is an intact LowVisionAid database that this build can open:
-    /// SQLite's integrity check passes, the clinic migration history is present, and every migration it records is
-    /// one this build knows (a backup from a newer version is refused; an older one is upgraded after restore).
+    /// SQLite's integrity check passes; its migration history names this app's migrations in their order (a backup
+    /// from a newer version is refused as newer, one naming anything else as not made by LowVisionAid); and every
+    /// table, column, index, foreign key, trigger and view is exactly what this app's migrations create for the
+    /// version its history names (<see cref="DatabaseSchema"/>). An older version is upgraded by the restore.
     /// </summary>
     public static RestoreCheck Check(string candidatePath, IReadOnlySet<string> knownMigrations)
     {
@@ -89,39 +86,14 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
 
         try
         {
-            using var connection = Open(candidatePath, SqliteOpenMode.ReadOnly);
+            using var connection = Sqlite.Open(candidatePath, SqliteOpenMode.ReadOnly);
             var integrity = Scalar(connection, "PRAGMA integrity_check");
             if (!string.Equals(integrity, "ok", StringComparison.Ordinal))
             {
                 return RestoreCheck.Refuse($"The backup file is damaged (SQLite integrity check: {Shorten(integrity)}). Choose another backup.");
             }
 
-            var applied = new List<string>();
-            foreach (var table in HistoryTables)
-            {
-                if (Scalar(connection, $"SELECT name FROM sqlite_master WHERE type = 'table' AND name = '{table}'") is null)
-                {
-                    if (table == HistoryTables[0])
-                    {
-                        return RestoreCheck.Refuse("This file is not a LowVisionAid database (it has no schema history). Choose a backup made by LowVisionAid.");
-                    }
-
-                    continue;
-                }
-
-                applied.AddRange(Column(connection, $"SELECT \"MigrationId\" FROM \"{table}\" ORDER BY \"MigrationId\""));
-            }
-
-            var unknown = applied.Where(m => !knownMigrations.Contains(m)).ToList();
-            if (unknown.Count > 0)
-            {
-                return RestoreCheck.Refuse($"This backup was made by a newer version of LowVisionAid (its schema has {unknown.Count} change(s) this version does not know, such as {unknown[0]}). Restore it with that version or a newer one.");
-            }
-
-            var missing = knownMigrations.Count(m => !applied.Contains(m) && !Access.AccessHistoryUpgrade.EarlierMigrations.Contains(m));
-            return new RestoreCheck(true, missing == 0
-                ? "The backup is intact and has the current schema."
-                : $"The backup is intact; its schema is older and will be upgraded ({missing} change(s)) after restore.", applied);
+            return CheckHistoryAndSchema(connection, knownMigrations);
         }
         catch (SqliteException e)
         {
@@ -130,48 +102,160 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
     }
 
     /// <summary>
-    /// Replaces the live database with <paramref name="candidatePath"/> after <see cref="Check"/> accepts it, first
-    /// taking a backup of the live database ("before-restore"). The copy goes through SQLite's backup API into the
-    /// live file, so connections held by the running app see the restored data and the file is never half-written.
-    /// The caller applies any pending migrations afterwards.
+    /// Replaces the live database with <paramref name="candidatePath"/> if <see cref="Check"/> accepts it. The file is
+    /// first copied into a working file (so it cannot change between check and restore), checked there, and, when it
+    /// is from an older version, upgraded there and checked again against the current schema. Only then is a backup
+    /// of the live database taken ("before-restore") and the working file copied into the live file through SQLite's
+    /// backup API, in one write transaction: connections held by the running app see the restored data, and a copy
+    /// that fails leaves the live file as it was. Any failure is a refusal in words; nothing is changed.
     /// </summary>
-    public RestoreCheck Restore(string candidatePath, IReadOnlySet<string> knownMigrations)
+    public async Task<RestoreCheck> RestoreAsync(string candidatePath, IReadOnlySet<string> knownMigrations, CancellationToken ct)
     {
-        var check = Check(candidatePath, knownMigrations);
-        if (!check.CanRestore)
+        ArgumentNullException.ThrowIfNull(knownMigrations);
+        if (!File.Exists(candidatePath))
         {
+            return Check(candidatePath, knownMigrations);
+        }
+
+        Directory.CreateDirectory(BackupFolder);
+        var work = Path.Combine(BackupFolder, "restore-" + Guid.NewGuid().ToString("N") + ".partial");
+        try
+        {
+            try
+            {
+                Copy(candidatePath, work);
+            }
+            catch (SqliteException)
+            {
+                return Check(candidatePath, knownMigrations);
+            }
+
+            var check = Check(work, knownMigrations);
+            if (!check.CanRestore)
+            {
+                return check;
+            }
+
+            var latest = Ordered(knownMigrations)[^1];
+            if (!string.Equals(check.AppliedMigrations.LastOrDefault(m => !Access.AccessHistoryUpgrade.EarlierMigrations.Contains(m)), latest, StringComparison.Ordinal))
+            {
+                await UpgradeAsync(work, ct).ConfigureAwait(false);
+                var differences = DatabaseSchema.Differences(DatabaseSchema.Read(work), DatabaseSchema.AtMigration(latest));
+                if (differences.Count > 0)
+                {
+                    return RestoreCheck.Refuse(SchemaRefusal("after its upgrade to the current version", differences));
+                }
+            }
+
+            Create("before-restore");
+            using (var source = Sqlite.Open(work, SqliteOpenMode.ReadOnly))
+            using (var live = Sqlite.Open(DatabasePath, SqliteOpenMode.ReadWrite))
+            {
+                source.BackupDatabase(live);
+            }
+
             return check;
         }
-
-        Create("before-restore");
-        using (var source = Open(candidatePath, SqliteOpenMode.ReadOnly))
-        using (var live = Open(DatabasePath, SqliteOpenMode.ReadWrite))
+        catch (Exception e) when (e is SqliteException or InvalidOperationException or IOException or DbUpdateException)
         {
-            source.BackupDatabase(live);
+            return RestoreCheck.Refuse(FailureMessage(e));
+        }
+        finally
+        {
+            SqliteConnection.ClearAllPools();
+            foreach (var leftover in new[] { work, work + "-journal", work + "-wal", work + "-shm" })
+            {
+                File.Delete(leftover);
+            }
+        }
+    }
+
+    /// <summary>The refusal for a restore that failed part way, with the reason and what to do.</summary>
+    public static string FailureMessage(Exception error)
+    {
+        ArgumentNullException.ThrowIfNull(error);
+        var reason = error is SqliteException { SqliteErrorCode: 5 or 6 }
+            ? $"the database stayed busy with other saves for over {Sqlite.BusyWait.TotalSeconds:0} seconds"
+            : error is SqliteException sqlite
+                ? $"SQLite error {sqlite.SqliteErrorCode}"
+                : "the file could not be prepared";
+        return $"The backup was not restored: {reason}. Nothing was changed. Try again when no one is saving; if it happens again, keep the file and the app's log and ask for help.";
+    }
+
+    private static RestoreCheck CheckHistoryAndSchema(SqliteConnection connection, IReadOnlySet<string> knownMigrations)
+    {
+        var history = HistoryTables[0];
+        var earlierHistory = HistoryTables[1];
+        if (Scalar(connection, $"SELECT name FROM sqlite_master WHERE type = 'table' AND name = '{history}'") is null)
+        {
+            return RestoreCheck.Refuse("This file is not a LowVisionAid database (it has no schema history). Choose a backup made by LowVisionAid.");
         }
 
-        SqliteConnection.ClearAllPools();
-        return check;
+        var applied = Column(connection, $"SELECT \"MigrationId\" FROM \"{history}\" ORDER BY \"MigrationId\"");
+        var twoContext = Scalar(connection, $"SELECT name FROM sqlite_master WHERE type = 'table' AND name = '{earlierHistory}'") is not null;
+        var earlier = twoContext ? Column(connection, $"SELECT \"MigrationId\" FROM \"{earlierHistory}\" ORDER BY \"MigrationId\"") : [];
+        var ordered = Ordered(knownMigrations);
+        var unknown = applied.Concat(earlier).Where(m => !knownMigrations.Contains(m)).ToList();
+        var newer = unknown.Where(m => MigrationId().IsMatch(m) && string.CompareOrdinal(m, ordered[^1]) > 0).ToList();
+        if (unknown.Count > 0 && newer.Count == unknown.Count && applied.Except(newer).SequenceEqual(ordered) && !twoContext)
+        {
+            return RestoreCheck.Refuse($"This backup was made by a newer version of LowVisionAid (its schema has {newer.Count} change(s) this version does not know, such as {newer[0]}). Restore it with that version or a newer one. Nothing was changed.");
+        }
+
+        var inOrder = applied.Count > 0 && applied.SequenceEqual(ordered.Take(applied.Count));
+        var earlierFits = !twoContext || (earlier.SequenceEqual(Access.AccessHistoryUpgrade.EarlierMigrations) && !applied.Contains(Access.AccessHistoryUpgrade.AccessTablesMigration));
+        if (unknown.Count > 0 || !inOrder || !earlierFits)
+        {
+            var named = unknown.Count > 0 ? $"names {unknown.Count} change(s) LowVisionAid never made, such as {Shorten(unknown[0])}" : "does not list LowVisionAid's changes in the order it makes them";
+            return RestoreCheck.Refuse($"This file was not made by LowVisionAid: its schema history {named}. Nothing was changed. Choose a backup made by LowVisionAid.");
+        }
+
+        var version = applied[^1];
+        var expected = twoContext ? DatabaseSchema.AtEarlierTwoContextMigration(version) : DatabaseSchema.AtMigration(version);
+        var differences = DatabaseSchema.Differences(DatabaseSchema.Read(connection), expected);
+        if (differences.Count > 0)
+        {
+            return RestoreCheck.Refuse(SchemaRefusal($"for the version its history names ({version})", differences));
+        }
+
+        var missing = ordered.Count(m => !applied.Contains(m));
+        return new RestoreCheck(true, missing == 0
+            ? "The backup is intact and has the current schema."
+            : $"The backup is intact; its schema is older and will be upgraded ({missing} change(s)) after restore.", [.. applied, .. earlier]);
+    }
+
+    private static string SchemaRefusal(string which, IReadOnlyList<string> differences)
+    {
+        const int shown = 8;
+        var list = string.Join("; ", differences.Take(shown)) + (differences.Count > shown ? $"; and {differences.Count - shown} more" : "");
+        return $"This backup was not restored: its schema is not the one LowVisionAid makes {which}. Differences: {list}. " +
+            "Nothing was changed. Restore a backup LowVisionAid made and that no other program has changed.";
+    }
+
+    private static List<string> Ordered(IReadOnlySet<string> knownMigrations) =>
+        knownMigrations.Where(m => !Access.AccessHistoryUpgrade.EarlierMigrations.Contains(m)).Order(StringComparer.Ordinal).ToList();
+
+    private static void Copy(string from, string to)
+    {
+        using var source = Sqlite.Open(from, SqliteOpenMode.ReadOnly);
+        using var copy = Sqlite.Open(to, SqliteOpenMode.ReadWriteCreate);
+        source.BackupDatabase(copy);
+        using var journal = copy.CreateCommand();
+        journal.CommandText = "PRAGMA journal_mode=DELETE";
+        journal.ExecuteNonQuery();
+    }
+
+    private static async Task UpgradeAsync(string path, CancellationToken ct)
+    {
+        await using var db = Sqlite.Context(path);
+        await db.UpgradeAsync(ct).ConfigureAwait(false);
     }
 
     /// <summary>The result of SQLite's integrity check on the database at <paramref name="path"/> ("ok" when intact).</summary>
     public static string IntegrityCheck(string path)
     {
-        using var connection = Open(path, SqliteOpenMode.ReadOnly);
+        using var connection = Sqlite.Open(path, SqliteOpenMode.ReadOnly);
         return Scalar(connection, "PRAGMA integrity_check") ?? "no answer";
-    }
-
-    private static SqliteConnection Open(string path, SqliteOpenMode mode)
-    {
-        var connection = new SqliteConnection(new SqliteConnectionStringBuilder
-        {
-            DataSource = path,
-            Mode = mode,
-            Pooling = false,
-            DefaultTimeout = 30,
-        }.ToString());
-        connection.Open();
-        return connection;
     }
 
     private static string? Scalar(SqliteConnection connection, string sql)
@@ -202,4 +286,7 @@ public sealed class DatabaseBackups(string databasePath, string backupFolder, Ti
         var info = new FileInfo(path);
         return new BackupFile(path, info.Name, info.LastWriteTimeUtc, info.Length);
     }
+
+    [GeneratedRegex(@"^[0-9]{14}_[A-Za-z0-9_]+$")]
+    private static partial Regex MigrationId();
 }

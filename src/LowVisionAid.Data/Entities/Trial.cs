@@ -1,3 +1,5 @@
+using LowVisionAid.Optics.Planning;
+
 namespace LowVisionAid.Data.Entities;
 
 /// <summary>A device tried with the client, what it achieved, what was decided, and when to follow up.</summary>

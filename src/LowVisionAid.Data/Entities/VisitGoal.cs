@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Data.Entities;
@@ -26,20 +27,6 @@ public sealed class VisitGoal
     /// <summary>The distance acuity the task needs (distance tasks such as television), e.g. 6/12.</summary>
     public Acuity? TargetAcuity { get; set; }
 
-    /// <summary>Television and faces are seen at a distance; every other task is near work.</summary>
-    public static bool IsDistanceTask(GoalTask task) => task is GoalTask.Television or GoalTask.Faces;
-}
-
-/// <summary>The everyday tasks clients most often bring.</summary>
-public enum GoalTask
-{
-    Newspaper,
-    Book,
-    MedicationLabels,
-    Phone,
-    Writing,
-    Mail,
-    Television,
-    Faces,
-    Other,
+    /// <summary>Television, faces, whiteboards and signs are seen at a distance; every other task is near work.</summary>
+    public static bool IsDistanceTask(GoalTask task) => TaskRules.For(task).Kind == ReadingTask.DistanceViewing;
 }

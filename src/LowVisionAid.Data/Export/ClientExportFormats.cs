@@ -1,6 +1,6 @@
 using System.Globalization;
-using System.Text;
 using System.Text.Json;
+using CsvHelper;
 
 namespace LowVisionAid.Data.Export;
 
@@ -11,6 +11,14 @@ public static class ClientExportFormats
     public const int FormatVersion = 1;
 
     private static readonly JsonWriterOptions Indented = new() { Indented = true };
+
+    private static readonly CsvWriterOptions CsvOptions = new()
+    {
+        Injection = CsvInjection.Escape,
+        WriteByteOrderMark = true,
+        NewLine = "\r\n",
+        FormatProvider = CultureInfo.InvariantCulture,
+    };
 
     public static byte[] ToJson(RecordRow record, DateTime exportedUtc)
     {
@@ -33,14 +41,21 @@ public static class ClientExportFormats
     /// <summary>
     /// CSV with the header <c>table,id,parent_table,parent_id,field,value</c>: every stored field of every row of
     /// the record on its own line, so the file holds exactly what the JSON holds, in a form a spreadsheet opens.
+    /// Written by CsvHelper (RFC 4180, UTF-8 with a byte order mark) with its formula guard: text that starts with
+    /// <c>=</c>, <c>+</c>, <c>-</c>, <c>@</c>, a tab or a carriage return gets an apostrophe in front, so a spreadsheet
+    /// shows it as text and never runs it; numbers are written as numbers (a logMAR of -0.1 stays -0.1).
     /// </summary>
     public static byte[] ToCsv(RecordRow record)
     {
         ArgumentNullException.ThrowIfNull(record);
-        var text = new StringBuilder();
-        text.Append("table,id,parent_table,parent_id,field,value\r\n");
-        WriteCsv(text, record, parent: null);
-        return new UTF8Encoding(encoderShouldEmitUTF8Identifier: true).GetPreamble().Concat(Encoding.UTF8.GetBytes(text.ToString())).ToArray();
+        using var stream = new MemoryStream();
+        using (var csv = CsvWriter.Create(stream, CsvOptions, leaveOpen: true))
+        {
+            csv.WriteRecord(["table", "id", "parent_table", "parent_id", "field", "value"]);
+            WriteCsv(csv, record, parent: null);
+        }
+
+        return stream.ToArray();
     }
 
     /// <summary>The stored value as invariant text (what the CSV holds and what tests compare).</summary>
@@ -86,37 +101,30 @@ public static class ClientExportFormats
         writer.WriteEndObject();
     }
 
-    private static void WriteCsv(StringBuilder text, RecordRow row, RecordRow? parent)
+    private static void WriteCsv(CsvWriter csv, RecordRow row, RecordRow? parent)
     {
         foreach (var (name, value) in row.Fields)
         {
-            text.Append(Cell(row.Table)).Append(',')
-                .Append(row.Id.ToString(CultureInfo.InvariantCulture)).Append(',')
-                .Append(Cell(parent?.Table)).Append(',')
-                .Append(parent?.Id.ToString(CultureInfo.InvariantCulture)).Append(',')
-                .Append(Cell(name)).Append(',')
-                .Append(Cell(AsText(value))).Append("\r\n");
+            csv.WriteField(row.Table);
+            csv.WriteField(row.Id);
+            csv.WriteField(parent?.Table);
+            csv.WriteField(parent?.Id);
+            csv.WriteField(name);
+            switch (value)
+            {
+                case long l: csv.WriteField(l); break;
+                case int i: csv.WriteField(i); break;
+                case double d: csv.WriteField(d); break;
+                case decimal m: csv.WriteField(m); break;
+                default: csv.WriteField(AsText(value)); break;
+            }
+
+            csv.EndRecord();
         }
 
         foreach (var child in row.Children)
         {
-            WriteCsv(text, child, row);
+            WriteCsv(csv, child, row);
         }
-    }
-
-    // RFC 4180 quoting; a leading =, +, - or @ is prefixed with an apostrophe so a spreadsheet never runs it as a formula.
-    private static string Cell(string? value)
-    {
-        if (string.IsNullOrEmpty(value))
-        {
-            return "";
-        }
-
-        if (value[0] is '=' or '+' or '-' or '@' or '\t' or '\r')
-        {
-            value = "'" + value;
-        }
-
-        return value.AsSpan().IndexOfAny(",\"\r\n") >= 0 ? "\"" + value.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : value;
     }
 }

@@ -16,7 +16,7 @@ public static class KitMatcher
     {
         ArgumentNullException.ThrowIfNull(device);
         ArgumentNullException.ThrowIfNull(context);
-        var distanceTask = context.Request.Task == ReadingTask.DistanceViewing;
+        var distanceTask = Ranking.IsDistanceTask(context.Request.Task);
         if (distanceTask != (device.Kind == DeviceKind.DistanceTelescope))
         {
             return null;

@@ -18,7 +18,7 @@ public enum AcuityNotation
     /// <summary>Visual acuity score, "VAS 85" (DICOM PS3.17 Annex RR.2.2).</summary>
     VisualAcuityScore,
 
-    /// <summary>ETDRS letter score, "85 letters" (85 − 50 × logMAR; from memory).</summary>
+    /// <summary>ETDRS letter score, "85 letters" (85 − 50 × logMAR; Gregori, Feuer and Rosenfeld 2010).</summary>
     EtdrsLetters,
 }
 

@@ -6,12 +6,13 @@ namespace LowVisionAid.Optics.Notation;
 
 /// <summary>
 /// Reads a distance acuity as a clinician types it and writes it back in any notation. Accepted forms:
-/// Snellen fractions in metres, feet or over a 4 m chart ("6/60", "20/200", "4/40", "6/7.5", "1/60");
+/// Snellen fractions in metres, feet or over a 4 m chart ("6/60", "20/200", "4/40", "6/7.5", "1/60"), with letters
+/// missed or gained on the line ("6/60 -2", "6/60+1", "20/70-2": 0.02 logMAR a letter on a 5-letter line, methods §1.1);
 /// decimal acuity with its word ("dec 0.5", "0.5 decimal"); logMAR with its word ("logMAR 0.30", "0.30 logMAR");
 /// VAS ("VAS 85"); ETDRS letters ("85 letters", "ETDRS 85"); letter-by-letter scoring ("top 1.0, 12 letters").
 /// A number on its own is read by <see cref="DistanceAcuityOptions.BareNumbers"/> (refused by default).
-/// Counting fingers, hand movements and light perception are recognised and refused with a message that says
-/// what to measure instead. Case, spaces, "." or "," decimals and Unicode look-alikes are tolerated.
+/// Counting fingers, hand movements and light perception are recognised and refused as an acuity for calculation,
+/// with a message that says what to measure instead (<see cref="NonChartVisionNotation"/> records them). Case, spaces, "." or "," decimals and Unicode look-alikes are tolerated.
 /// </summary>
 public static partial class DistanceAcuityNotation
 {
@@ -67,7 +68,13 @@ public static partial class DistanceAcuityNotation
 
         if ((match = EtdrsPattern().Match(normalised)).Success)
         {
-            // ETDRS letters 0–110 is logMAR 1.7 to −0.5 (the inverse formula lives in Acuity).
+            // ETDRS letters 1–110 is logMAR 1.68 to −0.5 (the inverse formula lives in Acuity). 0 letters is a floor,
+            // worse than the top line, not exactly logMAR 1.7 (methods §11).
+            if (NotationText.TryNumber(match.Groups["v"].Value, provider, out var letters, out _) && letters == 0)
+            {
+                return ParseResult.Fail<Acuity>(ParseMessages.EtdrsZeroIsAFloor);
+            }
+
             return Read(match, provider, v => v is >= 0 and <= 110 ? Acuity.LogMarOfEtdrsLetters(v) : double.NaN, ParseMessages.EtdrsOutOfRange);
         }
 
@@ -168,8 +175,26 @@ public static partial class DistanceAcuityNotation
 
         // Decimal acuity = numerator ÷ denominator (Snellen); logMAR through Acuity's one conversion.
         var logMar = Acuity.LogMarOfDecimal(numerator / denominator);
+        if (match.Groups["letters"].Success)
+        {
+            var letters = int.Parse(match.Groups["letters"].Value, System.Globalization.CultureInfo.InvariantCulture);
+            if (letters is < 1 or > MostLettersOnALine)
+            {
+                return ParseResult.Fail<Acuity>(ParseMessages.LettersOnLineOutOfRange);
+            }
+
+            // Letters missed (−) or gained (+) on the line: 0.1 / 5 = 0.02 logMAR a letter on a 5-letter line (methods §1.1).
+            logMar += (match.Groups["sign"].Value == "-" ? 1 : -1) * LogMarPerLetter * letters;
+        }
+
         return InRange(logMar) ? ParseResult.Ok(Acuity.FromLogMar(logMar)) : ParseResult.Fail<Acuity>(outOfRange);
     }
+
+    /// <summary>logMAR a letter on a 5-letter line: 0.1 / 5 = 0.02 (methods §1.1).</summary>
+    public const double LogMarPerLetter = 0.02;
+
+    // A 5-letter line: more than 4 letters missed or gained is another line.
+    private const int MostLettersOnALine = 4;
 
     private static ParseResult<Acuity> Read(Match match, IFormatProvider? provider, Func<double, double> toLogMar, string outOfRange)
     {
@@ -248,7 +273,7 @@ public static partial class DistanceAcuityNotation
         : normalised.StartsWith('l') || normalised.StartsWith('p') ? NonChartVisionLevel.LightPerception
         : NonChartVisionLevel.CountingFingers;
 
-    [GeneratedRegex(@"^(?<num>" + NotationText.Number + @")\s*/\s*(?<den>" + NotationText.Number + ")$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^(?<num>" + NotationText.Number + @")\s*/\s*(?<den>" + NotationText.Number + @")(?:\s*(?<sign>[-+])\s*(?<letters>[0-9]{1,3}))?$", RegexOptions.CultureInvariant)]
     private static partial Regex SnellenPattern();
 
     [GeneratedRegex(@"^(?:dec(?:imal)?\.?:?\s*(?<v>" + NotationText.Number + @")|(?<v>" + NotationText.Number + @")\s*dec(?:imal)?\.?)$", RegexOptions.CultureInvariant)]

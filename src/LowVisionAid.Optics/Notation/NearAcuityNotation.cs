@@ -9,6 +9,9 @@ namespace LowVisionAid.Optics.Notation;
 /// ("4M at 40 cm", "1.6M @ 25cm", "1M 40cm"), N at a distance ("N8 at 25 cm", approximate), points or x-height at a
 /// distance ("12 pt at 40 cm", "1.5 mm at 40 cm"), near Snellen equivalents at a distance ("20/50 at 40 cm",
 /// "6/15 at 40 cm"), metres over M ("0.40/1.0M"), and Jaeger ("J5", "J5 at 40 cm") with a warning.
+/// A near card's Snellen equivalent labels a print size for the card's design distance (usually 40 cm or 14 in), not an
+/// acuity at whatever distance the card was held (Colenbrander 2001): "20/50 at 25 cm" on a 40 cm card is 1.0M read at
+/// 25 cm, and the result warns when the two distances differ, asking for M units or the card's design distance.
 /// A print size without a distance is refused (except Jaeger, whose table assumes 40 cm, with a warning).
 /// </summary>
 public static partial class NearAcuityNotation
@@ -20,7 +23,18 @@ public static partial class NearAcuityNotation
     /// Parses a near acuity. Never throws. <paramref name="xHeightRatio"/> converts N and points (default 0.50).
     /// A null <paramref name="provider"/> means the current culture (it only decides the thousands separator).
     /// </summary>
-    public static ParseResult<NearAcuity> Parse(string? text, IFormatProvider? provider, XHeightRatio xHeightRatio = default)
+    public static ParseResult<NearAcuity> Parse(string? text, IFormatProvider? provider, XHeightRatio xHeightRatio = default) =>
+        Parse(text, provider, xHeightRatio, CardDesignDistance);
+
+    /// <summary>The design distance assumed for a near card's Snellen equivalents: 40 cm (methods §1.4, §11).</summary>
+    public static readonly Distance CardDesignDistance = Distance.FromCentimetres(40);
+
+    /// <summary>
+    /// Parses a near acuity, reading a near Snellen equivalent ("20/50 at 25 cm") as the print size its label names
+    /// at <paramref name="cardDesignDistance"/> (the card's design distance, e.g. 40 cm or 14 in), read at the
+    /// distance typed (Colenbrander 2001). Never throws.
+    /// </summary>
+    public static ParseResult<NearAcuity> Parse(string? text, IFormatProvider? provider, XHeightRatio xHeightRatio, Distance cardDesignDistance)
     {
         var normalised = NotationText.Normalise(text, out var error, ParseMessages.NearAcuityExpected);
         if (normalised is null)
@@ -61,9 +75,14 @@ public static partial class NearAcuityNotation
                     return ParseResult.Fail<NearAcuity>(distance.Error);
                 }
 
-                // A near Snellen equivalent at d: threshold M = d × MAR (inverse of logMAR = log₁₀(M/d)).
-                var threshold = acuity.Value.ThresholdPrintAt(distance.Value);
-                return Combine(ParseResult.Ok(threshold), distance, null);
+                // A near card's Snellen label names the print size M = d_design × MAR at the card's design distance
+                // (Colenbrander 2001; methods §1.2, §11), whatever distance the card was then held at.
+                var design = cardDesignDistance.Metres > 0 ? cardDesignDistance : CardDesignDistance;
+                var threshold = acuity.Value.ThresholdPrintAt(design);
+                var differs = Math.Abs(design.Metres - distance.Value.Metres) > 0.005;
+                return Combine(ParseResult.Ok(threshold), distance, differs
+                    ? ParseMessages.NearSnellenIsAPrintSize(sizeText, PrintSizeNotation.Format(threshold, PrintSizeUnit.MUnits, provider), DistanceNotation.Format(design, provider), DistanceNotation.Format(distance.Value, provider))
+                    : null);
             }
 
             var jaeger = PrintSizeNotation.JaegerPattern().Match(sizeText);
@@ -100,7 +119,7 @@ public static partial class NearAcuityNotation
         return result.TryGetValue(out nearAcuity);
     }
 
-    /// <summary>Checks a measurement entered as numbers, with the same messages as <see cref="Parse"/>.</summary>
+    /// <summary>Checks a measurement entered as numbers, with the same messages as <see cref="Parse(string?, IFormatProvider?, XHeightRatio)"/>.</summary>
     public static ParseResult<NearAcuity> FromMeasurement(PrintSize threshold, Distance testDistance)
     {
         if (!threshold.IsValid || !(threshold.M >= PrintSizeNotation.MinimumM && threshold.M <= PrintSizeNotation.MaximumM))

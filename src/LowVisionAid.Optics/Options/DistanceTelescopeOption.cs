@@ -4,9 +4,10 @@ using LowVisionAid.Optics.Quantities;
 namespace LowVisionAid.Optics.Options;
 
 /// <summary>
-/// Option 8: a telescope for television, faces and signs: magnification from current and goal acuity, its design and
-/// length, its field and the focusing needed for the object distance (methods §3.5). Never while walking; driving
-/// rules with aids differ by jurisdiction.
+/// Options 8 and 9: a telescope for television, faces, a board or signs, hand-held or spectacle-mounted (hands-free):
+/// magnification from current and goal acuity, its design and length, its field and the focusing needed for the object
+/// distance (methods §3.5), within the class's range (<see cref="DeviceRanges"/>). Never while walking; driving rules
+/// with aids differ by jurisdiction.
 /// </summary>
 public sealed record DistanceTelescopeOption : MagnifierOption
 {
@@ -14,7 +15,10 @@ public sealed record DistanceTelescopeOption : MagnifierOption
     public static IReadOnlyList<double> StockMagnifications { get; } = [2.0, 2.5, 3.0, 3.5, 4.0, 6.0, 8.0, 10.0];
 
     /// <inheritdoc/>
-    public override OptionKind Kind => OptionKind.DistanceTelescope;
+    public override OptionKind Kind => SpectacleMounted ? OptionKind.SpectacleTelescope : OptionKind.DistanceTelescope;
+
+    /// <summary>True for a spectacle-mounted (hands-free) telescope, false for a hand-held one.</summary>
+    public bool SpectacleMounted { get; init; }
 
     /// <summary>Magnification needed: MAR_current ÷ MAR_goal.</summary>
     public required double MagnificationNeeded { get; init; }
@@ -37,21 +41,26 @@ public sealed record DistanceTelescopeOption : MagnifierOption
     /// <summary>Extra focusing needed at the eye for that object with the telescope set for infinity: −L′/(1 − eL′).</summary>
     public required Power FocusForObject { get; init; }
 
-    /// <summary>Builds the option; <paramref name="kitMagnification"/> replaces the stock choice for a kit device.</summary>
-    public static DistanceTelescopeOption Create(OptionContext context, Acuity current, Acuity goal, double? kitMagnification = null, VisualAngle? statedField = null, string? kitId = null)
+    /// <summary>
+    /// Builds the option; <paramref name="kitMagnification"/> replaces the stock choice for a kit device. Hand-held
+    /// telescopes go to <see cref="DeviceRanges.StrongestHandHeldTelescope"/>, spectacle-mounted ones to
+    /// <see cref="DeviceRanges.StrongestSpectacleTelescope"/>; both eyes only when spectacle-mounted and at most
+    /// <see cref="DeviceRanges.StrongestBinocularTelescope"/> (methods §11).
+    /// </summary>
+    public static DistanceTelescopeOption Create(OptionContext context, Acuity current, Acuity goal, double? kitMagnification = null, VisualAngle? statedField = null, string? kitId = null, bool spectacleMounted = false)
     {
         ArgumentNullException.ThrowIfNull(context);
         var s = context.Settings;
         var needed = Telescope.MagnificationFor(current, goal);
-        var stock = StockMagnifications;
-        var m = kitMagnification ?? stock[^1];
+        var strongest = spectacleMounted ? context.Ranges.StrongestSpectacleTelescope : context.Ranges.StrongestHandHeldTelescope;
+        var m = kitMagnification ?? strongest;
         if (kitMagnification is null)
         {
-            for (var i = 0; i < stock.Count; i++)
+            foreach (var stock in StockMagnifications)
             {
-                if (stock[i] >= needed)
+                if (stock >= needed * s.PowerTolerance && stock <= strongest)
                 {
-                    m = stock[i];
+                    m = stock;
                     break;
                 }
             }
@@ -67,7 +76,11 @@ public sealed record DistanceTelescopeOption : MagnifierOption
         var required = needed / d;
         // Depth of field in object space: the eye's blur tolerance shrinks by M² through the telescope (derived, L′ ≈ M²L)
         var depth = OptionContext.DepthOfField(1.0 / d, s.BlurTolerance.Dioptres / (m * m));
-        var practical = m >= needed * s.PowerTolerance || kitMagnification is not null;
+        var beyond = kitMagnification is null
+            ? DeviceRanges.Beyond(spectacleMounted ? "A spectacle-mounted telescope" : "A hand-held telescope", needed, strongest, "×")
+            : null;
+        var practical = beyond is null;
+        var bothEyes = spectacleMounted && context.TwoEyes && m <= context.Ranges.StrongestBinocularTelescope + 1e-9;
         return new DistanceTelescopeOption
         {
             KitDeviceId = kitId,
@@ -75,19 +88,20 @@ public sealed record DistanceTelescopeOption : MagnifierOption
             DeliveredPower = OptionContext.Dioptres(delivered),
             MeetsRequiredPower = context.Meets(delivered, required),
             IsPractical = practical,
-            PracticalNote = practical ? null : Texts.TelescopeBeyondRange,
+            PracticalNote = beyond,
+            BeyondRange = beyond is not null,
+            SpectacleMounted = spectacleMounted,
+            Cost = context.Ranges.CostOf(spectacleMounted ? OptionKind.SpectacleTelescope : OptionKind.DistanceTelescope),
             WorkingDistance = objectDistance,
             EyeToLens = s.TelescopeEyeRelief,
             LinearField = FieldOfView.LinearFieldOfAngle(real, objectDistance),
             DepthOfField = depth,
-            Binocular = context.TwoEyes
-                ? new BinocularUse(true, Convergence.FromCentresOfRotation(context.Constraints.InterpupillaryDistance, objectDistance), null)
-                : new BinocularUse(false, 0, null),
+            Binocular = bothEyes ? context.BothEyesAt(objectDistance) : BinocularUse.OneEye,
             AccommodationOrAddNeeded = telescope.FocusDemandAtEye(objectDistance, s.TelescopeEyeRelief),
             LightAndContrast = Texts.LightDistance,
-            HandsFree = false,
-            SuitsTremor = false,
-            Posture = Texts.PostureDistanceTelescope,
+            HandsFree = spectacleMounted,
+            SuitsTremor = spectacleMounted,
+            Posture = spectacleMounted ? Texts.PostureSpectacleTelescope : Texts.PostureDistanceTelescope,
             MagnificationNeeded = needed,
             Magnification = m,
             Design = design,
@@ -99,13 +113,15 @@ public sealed record DistanceTelescopeOption : MagnifierOption
     }
 
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => string.Format(
+    protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
-        "{0} telescope {1:0.#}× ({2:0.0} cm long), field about {3:0.0}°: focus {4:+0.00} D nearer for {5:0.0} m. Never use it while walking.",
+        "{0} {1} telescope {2:0.#}× ({3:0.0} cm long){7}, field about {4:0.0}°: focus {5:+0.00} D nearer for {6:0.0#} m. Never use it while walking.",
+        SpectacleMounted ? "Spectacle-mounted" : "Hand-held",
         Design == TelescopeDesign.Galilean ? "Galilean" : "Keplerian",
         Magnification,
         Length.Centimetres,
         RealField.Degrees,
         FocusForObject.Dioptres,
-        ObjectDistance.Metres);
+        ObjectDistance.Metres,
+        Binocular.Feasible ? ", one for each eye" : ", for one eye");
 }

@@ -24,13 +24,18 @@ public sealed record HandMagnifierOption : MagnifierOption
     /// <summary>True when the device is illuminated (kit devices).</summary>
     public bool Illuminated { get; init; }
 
-    /// <summary>Builds the option for a context: lens F = required power (rounded up to 0.25 D), or a kit lens.</summary>
+    /// <summary>
+    /// Builds the option for a context: lens F = required power (rounded up to 0.25 D) with the aperture usually made at
+    /// that power (<see cref="DeviceRanges.ApertureFor"/>), illuminated when contrast or light is poor; or a kit lens.
+    /// </summary>
     public static HandMagnifierOption Create(OptionContext context, Power? kitLens = null, Distance? kitAperture = null, bool illuminated = false, string? kitId = null)
     {
         ArgumentNullException.ThrowIfNull(context);
         var s = context.Settings;
         var lens = kitLens ?? OptionContext.Dioptres(OptionContext.RoundUpToQuarter(context.Required));
-        var aperture = kitAperture ?? s.AssumedMagnifierAperture;
+        var aperture = kitAperture ?? context.Ranges.ApertureFor(lens);
+        illuminated |= kitLens is null && context.WantsLight;
+        var beyond = kitLens is null ? DeviceRanges.Beyond("A hand magnifier", lens.Dioptres, context.Ranges.StrongestHandMagnifier.Dioptres, " D") : null;
         var z = s.HandMagnifierEyeDistance;
         var distance = HandMagnifier.WithDistanceCorrection(lens, z);
         HandMagnifierView? withAdd = null;
@@ -44,7 +49,8 @@ public sealed record HandMagnifierOption : MagnifierOption
 
         var field = FieldOfView.LinearField(aperture, z + FieldOfView.EntrancePupilBehindSpectacles, lens);
         var characters = context.Characters(field);
-        var binocular = context.TwoEyes && lens <= SpectacleAdd.BinocularLimit;
+        // Image at infinity (distance correction worn): the lines of sight are PD apart at the lens (methods §11).
+        var binocular = context.BothEyesThroughOneLens(aperture, z + FieldOfView.EntrancePupilBehindSpectacles, null, lens);
         return new HandMagnifierOption
         {
             KitDeviceId = kitId,
@@ -60,6 +66,10 @@ public sealed record HandMagnifierOption : MagnifierOption
             DepthOfField = context.DepthOfField(lens.Dioptres),
             // Image at infinity: the light leaves the lens parallel, so the eyes need not converge (derived).
             Binocular = new BinocularUse(binocular, 0, null),
+            IsPractical = beyond is null,
+            PracticalNote = beyond,
+            BeyondRange = beyond is not null,
+            Cost = context.Ranges.CostOf(OptionKind.HandMagnifier),
             AccommodationOrAddNeeded = Power.Zero,
             LightAndContrast = Texts.LightHandMagnifier,
             HandsFree = false,
@@ -75,12 +85,14 @@ public sealed record HandMagnifierOption : MagnifierOption
     }
 
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => string.Format(
+    protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
-        "Hand magnifier {0:+0.00} D ({1:0.#}× nominal, {2:0.#}× trade, re 25 cm) held {3:0.0} cm above the page, distance glasses on: {4:0} letters in view.",
+        "{0}and magnifier {1:+0.00} D, {2:0} mm across ({3:0.#}× nominal, {4:0.#}× trade, re 25 cm) held {5:0.0} cm above the page, distance glasses on: {6} in view.",
+        Illuminated ? "Illuminated h" : "H",
         LensPower!.Value.Dioptres,
+        Aperture.Millimetres,
         Labels!.Value.Nominal,
         Labels!.Value.Trade,
         WorkingDistance.Centimetres,
-        Math.Floor(CharactersInView ?? 0));
+        LettersText(LettersInView ?? 0, provider));
 }

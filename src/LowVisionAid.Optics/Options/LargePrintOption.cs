@@ -45,7 +45,8 @@ public sealed record LargePrintOption : MagnifierOption
             PracticalNote = ratio <= UsualLargePrintLimit ? null : Texts.BeyondUsualLargePrint,
             WorkingDistance = OptionContext.Metres(d),
             DepthOfField = context.DepthOfField(1.0 / d),
-            Binocular = new BinocularUse(context.TwoEyes, context.TwoEyes ? Devices.Convergence.FromCentresOfRotation(context.Constraints.InterpupillaryDistance, OptionContext.Metres(d)) : 0, null),
+            Binocular = context.TwoEyes ? context.BothEyesAt(OptionContext.Metres(d)) : BinocularUse.OneEye,
+            Cost = context.Ranges.CostOf(OptionKind.LargePrint),
             AccommodationOrAddNeeded = OptionContext.Dioptres(add > 0 ? add : 1.0 / d),
             LightAndContrast = Texts.LightLargePrint,
             HandsFree = true,
@@ -58,7 +59,7 @@ public sealed record LargePrintOption : MagnifierOption
     }
 
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => string.Format(
+    protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
         "Large print: {0:0.0}M (about {1:0} pt), {2:0.0}× the target, read at {3:0} cm{4}.",
         PrintNeeded.M,

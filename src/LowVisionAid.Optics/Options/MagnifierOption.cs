@@ -3,7 +3,7 @@ using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Options;
 
-/// <summary>The eight classes of option a plan considers.</summary>
+/// <summary>The classes of option a plan considers.</summary>
 public enum OptionKind
 {
     /// <summary>Moving closer (relative distance magnification) with accommodation or a modest add.</summary>
@@ -27,8 +27,14 @@ public enum OptionKind
     /// <summary>Video magnifier or screen enlargement.</summary>
     VideoMagnifier = 7,
 
-    /// <summary>Telescope for distance tasks (television, faces, signs).</summary>
+    /// <summary>Hand-held telescope for distance tasks (television, faces, signs).</summary>
     DistanceTelescope = 8,
+
+    /// <summary>Spectacle-mounted (hands-free) telescope for distance tasks.</summary>
+    SpectacleTelescope = 9,
+
+    /// <summary>The text size or zoom built into a phone, tablet or computer (screen tasks).</summary>
+    ScreenMagnification = 10,
 }
 
 /// <summary>How many characters of the target print are in view, judged against reading fluency (methods §4.3).</summary>
@@ -46,9 +52,25 @@ public enum FluencyWarning
 
 /// <summary>Whether both eyes can be used, and what that asks of them.</summary>
 /// <param name="Feasible">True when binocular use is usually possible for this client and option.</param>
-/// <param name="ConvergenceDemand">Total convergence demand in prism dioptres when used with both eyes (0 for one eye).</param>
-/// <param name="BaseInPrismRule">Base-in prism by the rule add + 2 Δ (Siemsen 2012), when it applies; sources differ on total versus each eye.</param>
-public readonly record struct BinocularUse(bool Feasible, double ConvergenceDemand, double? BaseInPrismRule);
+/// <param name="ConvergenceDemand">
+/// Total convergence demand in prism dioptres when used with both eyes (0 for one eye), by the one rule
+/// <see cref="Devices.Convergence.AtSpectaclePlane"/>.
+/// </param>
+/// <param name="BaseInPrismEachEye">
+/// Base-in prism in each lens in the dispensing form, add + 2 Δ base-in each eye (methods §3.2, §11; Siemsen 2012),
+/// when it applies.
+/// </param>
+public readonly record struct BinocularUse(bool Feasible, double ConvergenceDemand, double? BaseInPrismEachEye)
+{
+    /// <summary>One eye: no convergence, no prism.</summary>
+    public static BinocularUse OneEye { get; } = new(false, 0, null);
+
+    /// <summary>
+    /// The convergence left for the eyes after the prism: demand − 2 × prism each eye (methods §11), never below 0;
+    /// the whole demand when there is no prism.
+    /// </summary>
+    public double ResidualConvergence => Math.Max(0, ConvergenceDemand - (2 * (BaseInPrismEachEye ?? 0)));
+}
 
 /// <summary>
 /// Aberration figures for a strong lens: prismatic effect 1 cm from the centre (Prentice's rule) and the colour fringe
@@ -160,8 +182,41 @@ public abstract record MagnifierOption
     /// <summary>Aberration notes for strong lenses (see <see cref="AberrationNotes.Advice"/>), or null.</summary>
     public AberrationNotes? Aberrations { get; init; }
 
-    /// <summary>A one-line plain-language summary, formatted with <paramref name="provider"/>.</summary>
-    public abstract string Summary(IFormatProvider provider);
+    /// <summary>The cost class of this option (from <see cref="DeviceRanges.Costs"/>).</summary>
+    public CostClass Cost { get; init; } = CostClass.Medium;
+
+    /// <summary>
+    /// Whole letters of the target print in view: ⌊characters⌋, the one rounding rule for letters (summary, table and
+    /// figures all use it); null when no lens limits them.
+    /// </summary>
+    public int? LettersInView => CharactersInView is { } c ? (int)Math.Floor(c + 1e-9) : null;
+
+    /// <summary>Distance from the eye (spectacle plane) to the page: eye-to-lens plus lens-to-page.</summary>
+    public Distance EyeToPage => (EyeToLens ?? Distance.Zero).Abs() + WorkingDistance.Abs();
+
+    /// <summary>
+    /// A one-line plain-language summary, formatted with <paramref name="provider"/>. An option beyond its class's
+    /// realistic range says so rather than describing a device that cannot be made.
+    /// </summary>
+    public string Summary(IFormatProvider provider) => !IsApplicable && NotApplicableBecause is { } why
+        ? Texts.NotNeededPrefix + why
+        : BeyondRange && PracticalNote is { } note
+            ? Texts.NotPracticalPrefix + note
+            : Describe(provider);
+
+    /// <summary>True when the device this option needs is beyond its class's realistic range (<see cref="DeviceRanges"/>).</summary>
+    public bool BeyondRange { get; init; }
+
+    /// <summary>The summary of an option within its class's range.</summary>
+    protected abstract string Describe(IFormatProvider provider);
+
+    /// <summary>"1 letter", "12 letters", or "less than one letter" for a whole count (see <see cref="LettersInView"/>).</summary>
+    public static string LettersText(int letters, IFormatProvider provider) => letters switch
+    {
+        <= 0 => "less than one letter",
+        1 => "1 letter",
+        _ => string.Format(provider, "{0} letters", letters),
+    };
 
     /// <summary>The text of a fluency warning, or null for none.</summary>
     public static string? FluencyText(FluencyWarning warning) => warning switch

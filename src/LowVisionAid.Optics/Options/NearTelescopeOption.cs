@@ -24,28 +24,34 @@ public sealed record NearTelescopeOption : MagnifierOption
     /// <summary>Real angular field (apparent field ÷ M, or the kit's stated field).</summary>
     public required VisualAngle RealField { get; init; }
 
+    /// <summary>The strongest reading cap considered: +10 D, a 10 cm working distance (common practice).</summary>
+    public const double StrongestReadingCap = 10;
+
     /// <summary>
-    /// Chooses the smallest stock magnification with M ≥ F_eq × preferred distance, then the cap F_eq/M (rounded up
-    /// to 0.25 D), so the working distance is at least the preferred one where the stock allows.
+    /// Chooses the smallest stock magnification with M ≥ F_eq × preferred distance, up to the strongest near telescope
+    /// (<see cref="DeviceRanges.StrongestNearTelescope"/>), then the cap F_eq/M (rounded up to 0.25 D), so the working
+    /// distance is at least the preferred one where the range allows. Beyond the strongest telescope with the strongest
+    /// cap the option is not practical.
     /// </summary>
     public static NearTelescopeOption Create(OptionContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
         var wanted = context.Required * context.Preferred;
-        var stock = StockMagnifications;
-        var m = stock[^1];
-        for (var i = 0; i < stock.Count; i++)
+        var strongest = context.Ranges.StrongestNearTelescope;
+        var m = strongest;
+        foreach (var stock in StockMagnifications)
         {
-            if (stock[i] >= wanted)
+            if (stock >= wanted * context.Settings.PowerTolerance && stock <= strongest)
             {
-                m = stock[i];
+                m = stock;
                 break;
             }
         }
 
         var cap = OptionContext.RoundUpToQuarter(context.Required / m);
         var option = ForTelescope(context, m, OptionContext.Dioptres(cap), null, null);
-        return wanted <= m ? option : option with { IsPractical = false, PracticalNote = Texts.TelescopeBeyondRange };
+        var beyond = DeviceRanges.Beyond("A near telescope", context.Required, strongest * StrongestReadingCap, " D");
+        return beyond is null ? option : option with { IsPractical = false, PracticalNote = beyond, BeyondRange = true };
     }
 
     /// <summary>The figures for a given telescope and cap (a kit device, or a chosen one).</summary>
@@ -71,10 +77,11 @@ public sealed record NearTelescopeOption : MagnifierOption
             LinearField = field,
             CharactersInView = characters,
             DepthOfField = context.DepthOfField(feq.Dioptres),
-            // Binocular telemicroscopes are converged for the working distance (common practice).
-            Binocular = context.TwoEyes
-                ? new BinocularUse(true, Convergence.AtSpectaclePlane(context.Constraints.InterpupillaryDistance, working), null)
-                : new BinocularUse(false, 0, null),
+            // Both eyes only when spectacle-mounted, low power and converged for the working distance (methods §11).
+            Binocular = context.TwoEyes && magnification <= context.Ranges.StrongestBinocularTelescope + 1e-9
+                ? context.BothEyesAt(working)
+                : BinocularUse.OneEye,
+            Cost = context.Ranges.CostOf(OptionKind.NearTelescope),
             AccommodationOrAddNeeded = Power.Zero,
             LightAndContrast = Texts.LightNearTelescope,
             HandsFree = true,
@@ -88,11 +95,12 @@ public sealed record NearTelescopeOption : MagnifierOption
     }
 
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => string.Format(
+    protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
-        "Near telescope {0:0.#}× with a {1:+0.00} D reading cap: page at {2:0.0} cm, {3:0} letters in view.",
+        "Near telescope {0:0.#}× with a {1:+0.00} D reading cap, {4}: page at {2:0.0} cm, {3} in view.",
         Magnification,
         ReadingCap.Dioptres,
         WorkingDistance.Centimetres,
-        Math.Floor(CharactersInView ?? 0));
+        LettersText(LettersInView ?? 0, provider),
+        Binocular.Feasible ? "a pair converged for the page" : "for one eye");
 }

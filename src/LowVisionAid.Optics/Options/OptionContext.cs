@@ -71,6 +71,30 @@ public sealed class OptionContext
     /// <summary>The add used with magnifiers: the add worn, else the typical reading add, D.</summary>
     public double Add { get; }
 
+    /// <summary>The device ranges and cost classes of the plan's settings.</summary>
+    public DeviceRanges Ranges => Settings.Ranges;
+
+    /// <summary>
+    /// True when contrast sensitivity is reduced (below <see cref="Ranking.LowContrast"/>) or the home lighting is dim:
+    /// magnifiers are then planned illuminated (Whittaker and Lovie-Kitchin 1994; methods §7.6).
+    /// </summary>
+    public bool WantsLight => Constraints.DimLighting || Constraints.LogContrastSensitivity is < Ranking.LowContrast;
+
+    /// <summary>The wanted field for binocular use: 4 letters of the target print, the least for fluent reading (methods §4.3).</summary>
+    internal Distance FewestLettersField => Distance.FromMillimetres(4 * Settings.CharacterPitch * Request.TargetPrint.XHeightMillimetres);
+
+    /// <summary>
+    /// Binocular use through one lens of aperture D with the pupils z from it and the image |l′| behind it (null at
+    /// infinity): possible only with two useful eyes and when the lens is wider than the separation of the lines of
+    /// sight plus the wanted field (Blommaert and Neve 1987; methods §11).
+    /// </summary>
+    internal bool BothEyesThroughOneLens(Distance aperture, Distance pupilToLens, Distance? imageBehindLens, Power equivalentPower) =>
+        TwoEyes && BinocularLens.SharedField(aperture, Constraints.InterpupillaryDistance, pupilToLens, imageBehindLens, equivalentPower) >= FewestLettersField;
+
+    /// <summary>Convergence for both eyes at an eye-to-target distance, by the one rule (spectacle plane).</summary>
+    internal BinocularUse BothEyesAt(Distance eyeToTarget, double? prismEachEye = null) =>
+        new(true, Convergence.AtSpectaclePlane(Constraints.InterpupillaryDistance, eyeToTarget), prismEachEye);
+
     internal bool Meets(double delivered) => delivered >= Required * Settings.PowerTolerance;
 
     internal bool Meets(double delivered, double required) => delivered >= required * Settings.PowerTolerance;

@@ -6,46 +6,76 @@ using LowVisionAid.Optics.Planning;
 namespace LowVisionAid.Optics.Options;
 
 /// <summary>
-/// The ranking rules, applied in this order. Options are sorted by the first rule on which they differ; there are no
-/// weights or hidden scores. A rule that does not concern the request (e.g. tremor when there is none) is skipped.
+/// The ranking rules, applied in this order: the order of trial in practice, simplest and most portable first, then
+/// telescopic and electronic devices when those fail or the task demands them (methods §11 "Order of trial in
+/// practice"; Dickinson, Low Vision: Principles and Practice; Freeman and Jose, The Art and Practice of Low Vision;
+/// common practice). Options are sorted by the first rule on which they differ; there are no weights or hidden scores.
+/// A rule that does not concern the request (e.g. tremor when there is none) is skipped. Each rule is shown on the
+/// page as a reason (<see cref="RankingReason.Text"/>).
 /// </summary>
 public enum RankingRule
 {
     /// <summary>Options that can be built for this client come first.</summary>
     Applicable = 1,
 
-    /// <summary>Options that suit the task come first (a distance device for distance tasks; room for a pen for writing).</summary>
+    /// <summary>
+    /// Options that suit the task come first: a distance option for distance tasks; room for a pen for writing; no
+    /// lens held over a screen; no large print for spot reading of labels and prices (common practice).
+    /// </summary>
     SuitsTask = 2,
 
     /// <summary>Options that give the required power come first.</summary>
     MeetsPower = 3,
 
-    /// <summary>Options that give it in a practical form come first.</summary>
+    /// <summary>Options within their class's realistic range (<see cref="DeviceRanges"/>) and in a practical form come first.</summary>
     Practical = 4,
 
     /// <summary>
-    /// Reading tasks: options with enough characters in view come first (sustained reading: 10 or more, then 4 or more;
-    /// other reading: 4 or more; Whittaker and Lovie-Kitchin 1993; common practice).
+    /// Reading tasks: options with at least 4 letters of the target print in view come first, the least for fluent
+    /// reading (Whittaker and Lovie-Kitchin 1993; Legge et al. 1985).
     /// </summary>
     EnoughCharacters = 5,
 
-    /// <summary>When hands-free use is wanted, or for sustained reading and writing: hands-free options come first.</summary>
-    HandsFree = 6,
+    /// <summary>With a tremor: options that need no steady hand come first (stands, spectacles, screens; common practice).</summary>
+    NoSteadyHand = 6,
 
-    /// <summary>With a tremor: options that need no steady hand come first (stands, spectacles, video).</summary>
-    NoSteadyHand = 7,
-
-    /// <summary>With two useful eyes: options that allow binocular use come first.</summary>
-    BothEyes = 8,
+    /// <summary>When hands-free use is wanted, or for writing: hands-free options come first.</summary>
+    HandsFree = 7,
 
     /// <summary>
-    /// Contrast below logCS 1.05 (threshold above 9 %): video magnifiers and illuminated devices come first; below logCS 0.6
-    /// (above 25 %), video magnifiers alone (Whittaker and Lovie-Kitchin 1994).
+    /// Contrast below logCS 1.05 (threshold above 9 %) or dim home lighting: video magnifiers and illuminated
+    /// magnifiers come first; below logCS 0.6 (above 25 %), video magnifiers alone (Whittaker and Lovie-Kitchin 1994;
+    /// methods §2.4, §7.6).
     /// </summary>
-    ContrastHelp = 9,
+    ContrastHelp = 8,
 
-    /// <summary>Finally, the working distance nearest the preferred one (smallest ratio either way) comes first.</summary>
-    NearestWorkingDistance = 10,
+    /// <summary>
+    /// The simplest, most portable class first: no device at all (moving closer, large print, built-in screen settings),
+    /// then spectacle adds, hand and stand magnifiers, then telescopes and video magnifiers (methods §11; Dickinson;
+    /// Freeman and Jose).
+    /// </summary>
+    Simplicity = 9,
+
+    /// <summary>
+    /// Sustained reading: devices that hold the focus for the client (stand, spectacles, screens) come before a
+    /// hand-held lens; stand magnifiers are a first-line choice for long reading in older clients (common practice).
+    /// </summary>
+    LongReadingSupport = 10,
+
+    /// <summary>
+    /// Sustained reading: options with 10 or more letters in view come first (methods §4.3; common practice: long
+    /// reading is slow and tiring with fewer).
+    /// </summary>
+    RoomyField = 11,
+
+    /// <summary>With two useful eyes: options that allow binocular use come first.</summary>
+    BothEyes = 12,
+
+    /// <summary>The lower cost class first (<see cref="DeviceRanges.Costs"/>; clinic-editable; common practice).</summary>
+    Cost = 13,
+
+    /// <summary>Finally, the eye-to-page distance nearest the preferred working distance (smallest ratio either way) comes first.</summary>
+    NearestWorkingDistance = 14,
 }
 
 /// <summary>One reason for an option's position: the rule and whether it counted in the option's favour.</summary>
@@ -64,18 +94,26 @@ public readonly record struct RankingReason(RankingRule Rule, bool InFavour)
         (RankingRule.MeetsPower, false) => "Falls short of the required magnification.",
         (RankingRule.Practical, true) => "Gives it in a practical form.",
         (RankingRule.Practical, false) => "Only in an impractical form (see its note).",
-        (RankingRule.EnoughCharacters, true) => "Enough letters in view for this reading.",
-        (RankingRule.EnoughCharacters, false) => "Too few letters in view for this reading.",
+        (RankingRule.EnoughCharacters, true) => "At least 4 letters in view, enough for fluent reading.",
+        (RankingRule.EnoughCharacters, false) => "Fewer than 4 letters in view: spot reading only.",
         (RankingRule.HandsFree, true) => "Leaves the hands free.",
         (RankingRule.HandsFree, false) => "Needs a hand to hold it.",
         (RankingRule.NoSteadyHand, true) => "Needs no steady hand.",
         (RankingRule.NoSteadyHand, false) => "Needs a steady hand.",
         (RankingRule.BothEyes, true) => "Can be used with both eyes.",
         (RankingRule.BothEyes, false) => "One eye only.",
-        (RankingRule.ContrastHelp, true) => "Helps with low contrast.",
-        (RankingRule.ContrastHelp, false) => "Does little for low contrast.",
-        (RankingRule.NearestWorkingDistance, true) => "Working distance within 25 % of the preferred one.",
-        (RankingRule.NearestWorkingDistance, false) => "Working distance far from the preferred one.",
+        (RankingRule.ContrastHelp, true) => "Brings its own light or contrast: helps with low contrast or dim lighting.",
+        (RankingRule.ContrastHelp, false) => "Does little for low contrast or dim lighting.",
+        (RankingRule.Simplicity, true) => "Simple and portable: tried first in practice.",
+        (RankingRule.Simplicity, false) => "A telescope or video magnifier: tried when plain lenses fail.",
+        (RankingRule.LongReadingSupport, true) => "Holds the focus for long reading.",
+        (RankingRule.LongReadingSupport, false) => "Must be held in focus by hand: tiring for long reading.",
+        (RankingRule.RoomyField, true) => "10 or more letters in view: comfortable for long reading.",
+        (RankingRule.RoomyField, false) => "Fewer than 10 letters in view: long reading may be slow and tiring.",
+        (RankingRule.Cost, true) => "Low cost.",
+        (RankingRule.Cost, false) => "Costs more.",
+        (RankingRule.NearestWorkingDistance, true) => "Eye-to-page distance within 25 % of the preferred working distance.",
+        (RankingRule.NearestWorkingDistance, false) => "Eye-to-page distance far from the preferred working distance.",
         _ => Rule.ToString(),
     };
 }
@@ -89,7 +127,7 @@ public sealed record RankedOption(int Position, MagnifierOption Option, Immutabl
 /// <summary>Orders options by the <see cref="RankingRule"/> rules, in order.</summary>
 public static class Ranking
 {
-    private const int RuleCount = 10;
+    private const int RuleCount = 14;
 
     /// <summary>The rules that concern a request, in the order they are applied.</summary>
     public static ImmutableArray<RankingRule> RulesFor(PlanRequest request)
@@ -134,7 +172,7 @@ public static class Ranking
         {
             order[i] = i;
             var option = options[i];
-            mismatch[i] = Math.Abs(Math.Log(option.WorkingDistance.Metres / preferred));
+            mismatch[i] = Math.Abs(Math.Log(option.EyeToPage.Metres / preferred));
             for (var r = 0; r < activeCount; r++)
             {
                 tiers[(i * RuleCount) + r] = Tier(active[r], option, request, mismatch[i]);
@@ -162,7 +200,8 @@ public static class Ranking
             var reasons = new RankingReason[activeCount];
             for (var r = 0; r < activeCount; r++)
             {
-                reasons[r] = new RankingReason(active[r], tiers[(i * RuleCount) + r] == 0);
+                // Plain lenses pass the simplicity rule too: only telescopes and video count against it.
+                reasons[r] = new RankingReason(active[r], tiers[(i * RuleCount) + r] <= (active[r] == RankingRule.Simplicity ? 1 : 0));
             }
 
             ranked[position] = new RankedOption(position + 1, options[i], ImmutableCollectionsMarshal.AsImmutableArray(reasons));
@@ -187,13 +226,20 @@ public static class Ranking
 
     private static bool Concerns(RankingRule rule, PlanRequest request) => rule switch
     {
-        RankingRule.EnoughCharacters => request.Task != ReadingTask.DistanceViewing,
-        RankingRule.HandsFree => request.Constraints.HandsFreeWanted || request.Task is ReadingTask.SustainedReading or ReadingTask.Writing,
+        RankingRule.EnoughCharacters => !IsDistanceTask(request.Task),
+        RankingRule.HandsFree => request.Constraints.HandsFreeWanted || request.Task is ReadingTask.Writing,
         RankingRule.NoSteadyHand => request.Constraints.Tremor,
+        RankingRule.LongReadingSupport or RankingRule.RoomyField => request.Task is ReadingTask.SustainedReading,
         RankingRule.BothEyes => request.Constraints.UsefulEyes >= 2,
-        RankingRule.ContrastHelp => request.Constraints.LogContrastSensitivity is < LowContrast,
+        RankingRule.ContrastHelp => request.Constraints.DimLighting || request.Constraints.LogContrastSensitivity is < LowContrast,
         _ => true,
     };
+
+    /// <summary>
+    /// True for a task at a distance (television, faces, a board, signs): planned from the distance acuities at the
+    /// entered distance, with moving closer and telescopes. The one place that tells distance tasks from near ones.
+    /// </summary>
+    public static bool IsDistanceTask(ReadingTask task) => task == ReadingTask.DistanceViewing;
 
     /// <summary>logCS below which contrast help is favoured (threshold above 9 %; Whittaker and Lovie-Kitchin 1994).</summary>
     public const double LowContrast = 1.05;
@@ -210,35 +256,57 @@ public static class Ranking
         RankingRule.SuitsTask => SuitsTask(o, request.Task) ? 0 : 1,
         RankingRule.MeetsPower => o.MeetsRequiredPower ? 0 : 1,
         RankingRule.Practical => o.IsPractical ? 0 : 1,
-        RankingRule.EnoughCharacters => o.CharactersInView switch
-        {
-            null => 0,
-            >= 10 => 0,
-            >= 4 => request.Task == ReadingTask.SustainedReading ? 1 : 0,
-            _ => 2,
-        },
+        RankingRule.EnoughCharacters => o.CharactersInView is null or >= FewestLettersForFluency ? 0 : 1,
         RankingRule.HandsFree => o.HandsFree ? 0 : 1,
         RankingRule.NoSteadyHand => o.SuitsTremor ? 0 : 1,
         RankingRule.BothEyes => o.Binocular.Feasible ? 0 : 1,
         RankingRule.ContrastHelp => HelpsContrast(o, request.Constraints.LogContrastSensitivity ?? 2) ? 0 : 1,
+        RankingRule.Simplicity => SimplicityTier(o.Kind),
+        RankingRule.LongReadingSupport => o.SuitsTremor ? 0 : 1,
+        RankingRule.RoomyField => o.CharactersInView is null or >= 10 ? 0 : 1,
+        RankingRule.Cost => (int)o.Cost - 1,
         RankingRule.NearestWorkingDistance => mismatch <= WithinQuarter ? 0 : 1,
         _ => 0,
     };
 
+    /// <summary>Fewest letters in view for fluent reading: 4 (Whittaker and Lovie-Kitchin 1993; methods §4.3).</summary>
+    public const double FewestLettersForFluency = 4;
+
     private static readonly double WithinQuarter = Math.Log(1.25);
 
-    private static bool SuitsTask(MagnifierOption o, ReadingTask task) => task switch
+    /// <summary>
+    /// The order of trial by class (methods §11): 0 for no device (moving closer, large print, built-in screen
+    /// settings), 1 for plain lenses (spectacle add, hand and stand magnifiers), 2 for telescopes and video magnifiers.
+    /// </summary>
+    public static int SimplicityTier(OptionKind kind) => kind switch
     {
-        ReadingTask.DistanceViewing => o.Kind is OptionKind.DistanceTelescope or OptionKind.MovingCloser,
-        ReadingTask.Writing => o.Kind is OptionKind.LargePrint or OptionKind.VideoMagnifier
-            || (o.HandsFree && o.WorkingDistance.Metres >= WritingRoomMetres),
-        ReadingTask.Screen => o.Kind is not (OptionKind.HandMagnifier or OptionKind.StandMagnifier or OptionKind.DistanceTelescope),
-        _ => o.Kind != OptionKind.DistanceTelescope,
+        OptionKind.MovingCloser or OptionKind.LargePrint or OptionKind.ScreenMagnification => 0,
+        OptionKind.SpectacleAdd or OptionKind.HandMagnifier or OptionKind.StandMagnifier => 1,
+        _ => 2,
     };
+
+    private static bool IsDistanceKind(OptionKind kind) => kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
+
+    private static bool SuitsTask(MagnifierOption o, ReadingTask task)
+    {
+        if (IsDistanceTask(task))
+        {
+            return IsDistanceKind(o.Kind) || o.Kind == OptionKind.MovingCloser;
+        }
+
+        return task switch
+        {
+            ReadingTask.Writing => o.Kind is OptionKind.LargePrint or OptionKind.VideoMagnifier
+                || (o.HandsFree && o.WorkingDistance.Metres >= WritingRoomMetres && !IsDistanceKind(o.Kind)),
+            ReadingTask.Screen => o.Kind is not (OptionKind.HandMagnifier or OptionKind.StandMagnifier or OptionKind.LargePrint) && !IsDistanceKind(o.Kind),
+            ReadingTask.SpotReading => o.Kind != OptionKind.LargePrint && !IsDistanceKind(o.Kind),
+            _ => !IsDistanceKind(o.Kind),
+        };
+    }
 
     private static bool HelpsContrast(MagnifierOption o, double logCs)
     {
-        if (o.Kind == OptionKind.VideoMagnifier)
+        if (o.Kind == OptionKind.VideoMagnifier || o is ScreenMagnificationOption { ReversedPolarityAdvised: true })
         {
             return true;
         }

@@ -3,7 +3,10 @@ using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Optics.Options;
 
-/// <summary>Option 3: a spectacle-mounted high add, for both eyes with base-in prism or for the better eye (methods §3.2).</summary>
+/// <summary>
+/// Option 3: a spectacle-mounted high add, for both eyes with base-in prism in each lens or for the better eye
+/// (methods §3.2), within the strongest add usually made (<see cref="DeviceRanges.StrongestSpectacleAdd"/>).
+/// </summary>
 public sealed record SpectacleAddOption : MagnifierOption
 {
     /// <inheritdoc/>
@@ -31,6 +34,7 @@ public sealed record SpectacleAddOption : MagnifierOption
         var working = SpectacleAdd.WorkingDistance(OptionContext.Dioptres(add), OptionContext.Dioptres(accommodation));
         var addPower = OptionContext.Dioptres(add);
         var binocular = context.TwoEyes && SpectacleAdd.BinocularUsuallyPossible(addPower);
+        var beyond = kitAdd is null ? DeviceRanges.Beyond("An add", add, context.Ranges.StrongestSpectacleAdd.Dioptres, " D") : null;
         var field = FieldOfView.LinearField(s.SpectacleLensAperture, FieldOfView.EntrancePupilBehindSpectacles, OptionContext.Dioptres(delivered));
         var characters = context.Characters(field);
         return new SpectacleAddOption
@@ -48,9 +52,13 @@ public sealed record SpectacleAddOption : MagnifierOption
             LinearField = field,
             CharactersInView = characters,
             DepthOfField = context.DepthOfField(delivered),
+            IsPractical = beyond is null,
+            PracticalNote = beyond,
+            BeyondRange = beyond is not null,
+            Cost = context.Ranges.CostOf(OptionKind.SpectacleAdd),
             Binocular = binocular
-                ? new BinocularUse(true, Convergence.AtSpectaclePlane(context.Constraints.InterpupillaryDistance, working), SpectacleAdd.BaseInPrismRule(addPower))
-                : new BinocularUse(false, 0, null),
+                ? context.BothEyesAt(working, SpectacleAdd.BaseInPrismEachEye(addPower))
+                : BinocularUse.OneEye,
             AccommodationOrAddNeeded = addPower,
             LightAndContrast = Texts.LightSpectacleAdd,
             HandsFree = true,
@@ -60,11 +68,17 @@ public sealed record SpectacleAddOption : MagnifierOption
             Aberrations = AberrationNotes.For(addPower),
             Add = addPower,
             NearLensPower = SpectacleAdd.NearLensPower(context.Constraints.DistanceRefraction, addPower),
+            TooStrongForBothEyes = context.TwoEyes && !binocular,
         };
     }
 
+    /// <summary>True when the client has two useful eyes but the add is too strong for both (see <see cref="SpectacleAdd.BinocularLimit"/>).</summary>
+    public bool TooStrongForBothEyes { get; init; }
+
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => Binocular.Feasible
-        ? string.Format(provider, "Reading spectacles {0:+0.00} D for both eyes with about {1:0} Δ base-in: page at {2:0.0} cm.", Add.Dioptres, Binocular.BaseInPrismRule, WorkingDistance.Centimetres)
-        : string.Format(provider, "Reading spectacles {0:+0.00} D for the better eye only: page at {1:0.0} cm.", Add.Dioptres, WorkingDistance.Centimetres);
+    protected override string Describe(IFormatProvider provider) => Binocular.Feasible
+        ? string.Format(provider, "Reading spectacles {0:+0.00} D for both eyes, {1:0.#} Δ base-in in each lens (convergence left after the prism {2:0.#} Δ): page at {3:0.0} cm.", Add.Dioptres, Binocular.BaseInPrismEachEye, Binocular.ResidualConvergence, WorkingDistance.Centimetres)
+        : TooStrongForBothEyes
+            ? string.Format(provider, "Reading spectacles {0:+0.00} D for the better eye only (too strong for both eyes; the other eye occluded or fogged): page at {1:0.0} cm.", Add.Dioptres, WorkingDistance.Centimetres)
+            : string.Format(provider, "Reading spectacles {0:+0.00} D for the useful eye: page at {1:0.0} cm.", Add.Dioptres, WorkingDistance.Centimetres);
 }

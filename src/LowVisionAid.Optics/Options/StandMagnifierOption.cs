@@ -50,7 +50,9 @@ public sealed record StandMagnifierOption : MagnifierOption
 
         var image = (1.0 / a) - z;
         var stand = StandMagnifier.FromImagePosition(OptionContext.Metres(image), 1.0 + (lens * image));
-        return FromStand(context, stand, OptionContext.Metres(z), context.Settings.AssumedMagnifierAperture, false, null);
+        var option = FromStand(context, stand, OptionContext.Metres(z), context.Ranges.ApertureFor(stand.LensPower), context.WantsLight, null);
+        var beyond = DeviceRanges.Beyond("A stand magnifier lens", lens, context.Ranges.StrongestStandMagnifier.Dioptres, " D");
+        return beyond is null ? option : option with { IsPractical = false, PracticalNote = beyond, BeyondRange = true };
     }
 
     /// <summary>
@@ -71,7 +73,9 @@ public sealed record StandMagnifierOption : MagnifierOption
         var feq = view.EquivalentPower;
         var field = FieldOfView.LinearField(aperture, eyeToLens + FieldOfView.EntrancePupilBehindSpectacles, feq);
         var characters = context.Characters(field);
-        var binocular = context.TwoEyes && feq <= SpectacleAdd.BinocularLimit;
+        // The image lies |l′| below the lens: the lines of sight are PD·|l′|/(z + |l′|) apart at the lens (methods §11).
+        var pupil = eyeToLens + FieldOfView.EntrancePupilBehindSpectacles;
+        var binocular = context.BothEyesThroughOneLens(aperture, pupil, stand.ImageBelowLens, feq);
         var imageToEye = eyeToLens + stand.ImageBelowLens;
         return new StandMagnifierOption
         {
@@ -86,7 +90,8 @@ public sealed record StandMagnifierOption : MagnifierOption
             LinearField = field,
             CharactersInView = characters,
             DepthOfField = context.DepthOfField(feq.Dioptres),
-            Binocular = new BinocularUse(binocular, binocular ? Convergence.AtSpectaclePlane(context.Constraints.InterpupillaryDistance, imageToEye) : 0, null),
+            Binocular = binocular ? context.BothEyesAt(imageToEye) : BinocularUse.OneEye,
+            Cost = context.Ranges.CostOf(OptionKind.StandMagnifier),
             AccommodationOrAddNeeded = view.AddNeeded,
             LightAndContrast = Texts.LightStandMagnifier,
             HandsFree = false,
@@ -102,13 +107,15 @@ public sealed record StandMagnifierOption : MagnifierOption
     }
 
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => string.Format(
+    protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
-        "Stand magnifier {0:+0.00} D, image {1:0.0} cm below the lens, enlargement {2:0.0}×: look from {3:0.0} cm with a {4:+0.00} D add, {5:0} letters in view.",
+        "{0}tand magnifier {1:+0.00} D, {6:0} mm across, image {2:0.0} cm below the lens, enlargement {3:0.0}×: look from {4:0.0} cm with a {5:+0.00} D add, {7} in view.",
+        Illuminated ? "Illuminated s" : "S",
         Stand.LensPower.Dioptres,
         Stand.ImageBelowLens.Centimetres,
         Stand.EnlargementRatio,
         View.EyeToLens.Centimetres,
         View.AddNeeded.Dioptres,
-        Math.Floor(CharactersInView ?? 0));
+        Aperture.Millimetres,
+        LettersText(LettersInView ?? 0, provider));
 }

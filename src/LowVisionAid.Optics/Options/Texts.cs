@@ -1,3 +1,5 @@
+using System.Text;
+
 namespace LowVisionAid.Optics.Options;
 
 /// <summary>The plain-language notes options carry. One home for the wording.</summary>
@@ -15,8 +17,35 @@ public static class Texts
     /// <summary>Spectacle add not needed.</summary>
     public const string AccommodationAloneIsEnough = "The client's own focusing gives this power: see moving closer.";
 
-    /// <summary>Telescope beyond the practical range.</summary>
-    public const string TelescopeBeyondRange = "This needs more than the strongest telescope considered (10× for distance; for near, 8× at a working distance shorter than the preferred one).";
+    /// <summary>The start of the summary of an option that does not apply.</summary>
+    public const string NotNeededPrefix = "Not needed: ";
+
+    /// <summary>The start of the summary of an option beyond its class's range.</summary>
+    public const string NotPracticalPrefix = "Not practical: ";
+
+    /// <summary>A device beyond its class's range: {0} the device, {1} the need, {2} its unit, {3} the strongest usually made.</summary>
+    public static readonly CompositeFormat BeyondRangeFormat = CompositeFormat.Parse("{0} of {1:0.#}{2} would be needed; the strongest usually made is about {3:0.#}{2}.");
+
+    /// <summary>A video magnifier beyond its useful enlargement: {0} the enlargement needed, {1} the largest useful one.</summary>
+    public static readonly CompositeFormat VideoBeyondRangeFormat = CompositeFormat.Parse("An enlargement of {0:0}× would be needed, but fewer than 4 letters would fit on a screen line beyond about {1:0}×.");
+
+    /// <summary>Screen magnification beyond the screen: {0} the zoom needed.</summary>
+    public static readonly CompositeFormat ScreenBeyondRangeFormat = CompositeFormat.Parse("A zoom of {0:0} % would be needed, but fewer than 4 letters would then fit across this screen; use a larger screen or speech output.");
+
+    /// <summary>Moving closer when the print is already large enough at the preferred distance.</summary>
+    public const string AlreadyLargeEnough = "The print is already large enough at the preferred distance.";
+
+    /// <summary>Light for built-in screen magnification.</summary>
+    public const string LightScreen = "Turn the screen brightness up and reduce reflections; high-contrast text helps.";
+
+    /// <summary>Light for built-in screen magnification when contrast sensitivity or lighting is poor.</summary>
+    public const string LightScreenReversed = "Contrast is poor: turn on reversed polarity (light text on a dark background; the colour-inversion or dark setting) and high-contrast text, and keep the room light off the screen.";
+
+    /// <summary>Posture: screens.</summary>
+    public const string PostureScreen = "Hold or place the screen at the stated distance; a stand or arm for the screen saves the neck and arms.";
+
+    /// <summary>Posture: spectacle-mounted telescopes.</summary>
+    public const string PostureSpectacleTelescope = "Seated, for watching (television, a talk, a stage); take the spectacles off or look under the telescope to move about.";
 
     /// <summary>Light for close work without a lens.</summary>
     public const string LightCloseWork = "Light the page well from the side, shielded from the eyes; matt paper and dark, well-spaced print help.";

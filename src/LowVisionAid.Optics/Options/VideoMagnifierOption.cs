@@ -24,6 +24,19 @@ public sealed record VideoMagnifierOption : MagnifierOption
     /// <summary>Characters of the target print on one screen line.</summary>
     public required double CharactersPerLine { get; init; }
 
+    /// <summary>
+    /// The largest useful enlargement on a screen: the enlargement at which only <see cref="DeviceRanges.FewestLettersPerScreenLine"/>
+    /// letters of the print still fit on a line, ER = width ÷ (n·k·h_x) (methods §3.6, §4.2), and never above
+    /// <see cref="DeviceRanges.StrongestVideoEnlargement"/>.
+    /// </summary>
+    public static double LargestUsefulEnlargement(OptionContext context, Distance screenWidth)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var r = context.Ranges;
+        var byLetters = screenWidth.Millimetres / (r.FewestLettersPerScreenLine * context.Settings.CharacterPitch * context.Request.TargetPrint.XHeightMillimetres);
+        return Math.Min(r.StrongestVideoEnlargement, byLetters);
+    }
+
     /// <summary>Builds the option at the preferred distance; for a kit device, its largest enlargement caps ER.</summary>
     public static VideoMagnifierOption Create(OptionContext context, double? kitMaximumEnlargement = null, string? kitId = null)
     {
@@ -35,6 +48,10 @@ public sealed record VideoMagnifierOption : MagnifierOption
         var feq = VideoMagnifier.EquivalentPower(enlargement, viewing);
         var perLine = VideoMagnifier.CharactersPerLine(s.ScreenWidth, context.Request.TargetPrint, s.CharacterPitch, enlargement);
         var add = context.AddNeededAt(1.0 / context.Preferred);
+        var largest = LargestUsefulEnlargement(context, s.ScreenWidth);
+        var beyond = kitMaximumEnlargement is null && needed > largest * (1 + 1e-9)
+            ? string.Format(System.Globalization.CultureInfo.InvariantCulture, Texts.VideoBeyondRangeFormat, needed, largest)
+            : null;
         return new VideoMagnifierOption
         {
             KitDeviceId = kitId,
@@ -46,9 +63,11 @@ public sealed record VideoMagnifierOption : MagnifierOption
             CharactersInView = perLine,
             // The eye focuses on the screen, so its own depth of focus at 1/d applies (methods §4.4 form).
             DepthOfField = context.DepthOfField(1.0 / context.Preferred),
-            Binocular = context.TwoEyes
-                ? new BinocularUse(true, Convergence.FromCentresOfRotation(context.Constraints.InterpupillaryDistance, viewing), null)
-                : new BinocularUse(false, 0, null),
+            Binocular = context.TwoEyes ? context.BothEyesAt(viewing) : BinocularUse.OneEye,
+            IsPractical = beyond is null,
+            PracticalNote = beyond,
+            BeyondRange = beyond is not null,
+            Cost = context.Ranges.CostOf(OptionKind.VideoMagnifier),
             AccommodationOrAddNeeded = OptionContext.Dioptres(add),
             LightAndContrast = Texts.LightVideo,
             HandsFree = true,
@@ -63,11 +82,11 @@ public sealed record VideoMagnifierOption : MagnifierOption
     }
 
     /// <inheritdoc/>
-    public override string Summary(IFormatProvider provider) => string.Format(
+    protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
-        "Video magnifier at {0:0.0}× viewed from {1:0} cm: {2:0} letters per line on a {3:0} cm wide screen.",
+        "Video magnifier at {0:0.0}× viewed from {1:0} cm: {2} per line on a {3:0} cm wide screen.",
         Enlargement,
         ViewingDistance.Centimetres,
-        Math.Floor(CharactersPerLine),
+        LettersText(LettersInView ?? 0, provider),
         ScreenWidth.Centimetres);
 }

@@ -18,6 +18,12 @@ public sealed class Caution
     /// <summary>Results are a starting point.</summary>
     public static Caution StartingPoint { get; } = new("starting-point", "These figures are a starting point for the licensed practitioner: confirm the choice with a trial using the client's own reading material, and follow local rules.");
 
+    /// <summary>The need is beyond every optical class (methods §11).</summary>
+    public static Caution BeyondOptical { get; } = new("beyond-optical", "The magnification needed is beyond every optical aid that is usually made (spectacles, hand and stand magnifiers, telescopes): offer electronic magnification (a video magnifier, or zoom and speech on a phone, tablet or computer) and non-visual means (audio books, talking devices such as watches, scales and label readers, speech output, tactile marking), and refer to low-vision rehabilitation.");
+
+    /// <summary>The need is beyond every optical class and beyond a video magnifier's useful enlargement (methods §11).</summary>
+    public static Caution BeyondEveryDevice { get; } = new("beyond-every-device", "The magnification needed is beyond every optical aid and beyond what a video magnifier shows usefully (fewer than 4 letters a line): rely on non-visual means (audio books, talking devices such as watches, scales and label readers, speech output on phones and computers, tactile marking) and refer to low-vision rehabilitation and sight-loss services.");
+
     /// <summary>Sunlight and lenses.</summary>
     public static Caution SunlightFire { get; } = new("sunlight-fire", "A magnifying lens left in sunlight can focus it and start a fire: store lenses covered or in a drawer, away from windows.");
 

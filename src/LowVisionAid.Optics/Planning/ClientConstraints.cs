@@ -38,6 +38,12 @@ public sealed record ClientConstraints
     /// <summary>Letter contrast sensitivity in logCS (Pelli-Robson style), or null if not measured.</summary>
     public double? LogContrastSensitivity { get; init; }
 
+    /// <summary>
+    /// The client's home lighting for the task is dim or poor (asked at the visit). Illuminated devices and video
+    /// magnifiers then rank higher (methods §7.6, §11; common practice). Default false.
+    /// </summary>
+    public bool DimLighting { get; init; }
+
     /// <summary>Distance interpupillary distance. Default 64 mm.</summary>
     public Distance InterpupillaryDistance { get; init; } = Distance.FromMillimetres(64);
 }

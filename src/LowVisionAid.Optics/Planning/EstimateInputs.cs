@@ -14,10 +14,16 @@ public sealed record EstimateInputs
     public static EstimateInputs None { get; } = new();
 
     /// <summary>
-    /// The acuity reserve for the Kestenbaum and near-acuity estimates, or null for the task's default: spot reading
-    /// 1:1, sustained reading 3:1, writing and screens 2:1 (methods §2.3).
+    /// A reserve ratio the practitioner entered for the Kestenbaum and near-acuity estimates (for example one measured
+    /// for this reader); null to use <see cref="ReserveChoice"/> or the task's usual level (<see cref="TaskRules"/>).
     /// </summary>
     public AcuityReserve? Reserve { get; init; }
+
+    /// <summary>
+    /// A reserve level the practitioner chose (e.g. <see cref="ReserveLevel.Sustained"/> for long or high-speed
+    /// reading), its ratio taken from <see cref="PlanSettings.Reserves"/>; null for the task's usual level.
+    /// </summary>
+    public ReserveLevel? ReserveChoice { get; init; }
 
     /// <summary>The smallest print read at the near test (threshold), with the add for that distance worn.</summary>
     public PrintSize? NearThresholdPrint { get; init; }
@@ -35,16 +41,14 @@ public sealed record EstimateInputs
     public Distance? ReadingTestDistance { get; init; }
 
     /// <summary>True when any estimate can be made from these inputs together with a distance acuity, if given.</summary>
-    public bool CanEstimate(Acuity? distanceAcuity) =>
+    public bool CanEstimate(Acuity? distanceAcuity) => CanEstimate(distanceAcuity, ReadingTask.SustainedReading);
+
+    /// <summary>
+    /// True when any estimate can be made for the task from these inputs together with a distance acuity, if given.
+    /// Spot tasks use threshold acuity only: a reading curve does not count for them (methods §11).
+    /// </summary>
+    public bool CanEstimate(Acuity? distanceAcuity, ReadingTask task) =>
         distanceAcuity is not null
         || (NearThresholdPrint is not null && NearTestDistance is not null)
-        || (ReadingTestDistance is not null && (CriticalPrintSize is not null || !ReadingPoints.IsDefaultOrEmpty));
-
-    /// <summary>The reserve used for a task when <see cref="Reserve"/> is not given.</summary>
-    public static AcuityReserve DefaultReserveFor(ReadingTask task) => task switch
-    {
-        ReadingTask.SpotReading => AcuityReserve.Spot,
-        ReadingTask.SustainedReading => AcuityReserve.Sustained,
-        _ => AcuityReserve.Fluent,
-    };
+        || (task != ReadingTask.SpotReading && ReadingTestDistance is not null && (CriticalPrintSize is not null || !ReadingPoints.IsDefaultOrEmpty));
 }

@@ -29,6 +29,15 @@ public sealed record PlanRequest
     /// <summary>The task.</summary>
     public required ReadingTask Task { get; init; }
 
+    /// <summary>
+    /// The everyday task the plan is for, when known; its <see cref="TaskRules.For(GoalTask)"/> rule gives the sane
+    /// distance range (its kind must be <see cref="Task"/>). Null: the range of <see cref="Task"/>.
+    /// </summary>
+    public GoalTask? Goal { get; init; }
+
+    /// <summary>The rule the request is planned by: the goal's when given, else the task kind's.</summary>
+    public TaskRule Rule => Goal is { } goal ? TaskRules.For(goal) : TaskRules.For(Task);
+
     /// <summary>The client's constraints. Default: <see cref="ClientConstraints.None"/>.</summary>
     public ClientConstraints Constraints { get; init; } = ClientConstraints.None;
 

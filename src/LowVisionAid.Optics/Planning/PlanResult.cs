@@ -28,6 +28,15 @@ public sealed record PlanResult
     public PowerMethod? RequiredPowerFrom { get; init; }
 
     /// <summary>
+    /// The acuity reserve the estimates used, and why (<see cref="TaskRules.ReserveFor"/>); null for distance viewing,
+    /// whose requirement comes from the acuity wanted.
+    /// </summary>
+    public ReserveDecision? Reserve { get; init; }
+
+    /// <summary>The blur tolerance the depths of field were worked out with (<see cref="DepthOfFieldRule"/> unless the clinician set one).</summary>
+    public Quantities.Power BlurTolerance { get; init; } = Quantities.Power.FromDioptres(DepthOfFieldRule.NormalEyeDioptres);
+
+    /// <summary>
     /// Every required-power estimate the inputs allowed, side by side, with the pairs that disagree by more than
     /// 0.2 log units (<see cref="EstimateComparison.HasDisagreement"/>); null when no estimate inputs were given.
     /// </summary>

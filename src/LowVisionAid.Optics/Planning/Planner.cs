@@ -14,7 +14,7 @@ public static class Planner
     /// The version of the methods behind a plan. It changes whenever a formula, a default or a ranking rule changes,
     /// so that a stored plan can be told apart from one built today.
     /// </summary>
-    public const string MethodVersion = "2026.12.1";
+    public const string MethodVersion = "2026.12.2";
 
     /// <summary>What is missing or out of range in a request, each with what to enter instead; empty when it can be planned.</summary>
     public static ImmutableArray<string> Check(PlanRequest request)
@@ -28,17 +28,26 @@ public static class Planner
             Add("Enter the target print size in M units, e.g. 1.0 for newsprint.");
         }
 
+        var knownTask = Enum.IsDefined(request.Task);
+        if (!knownTask)
+        {
+            Add("Choose the task: spot reading, sustained reading, writing, a screen or distance viewing.");
+        }
+        else if (request.Goal is { } goal && (!Enum.IsDefined(goal) || TaskRules.For(goal).Kind != request.Task))
+        {
+            Add("The everyday task and the kind of task do not match: choose the task again.");
+        }
+
         if (!(request.PreferredDistance.Metres > 0))
         {
             Add("Enter the preferred working distance, greater than zero, e.g. 40 cm.");
         }
-
-        if (!Enum.IsDefined(request.Task))
+        else if (knownTask && DistanceProblem(request) is { } distanceProblem)
         {
-            Add("Choose the task: spot reading, sustained reading, writing, a screen or distance viewing.");
+            Add(distanceProblem);
         }
 
-        if (request.Task == ReadingTask.DistanceViewing)
+        if (Ranking.IsDistanceTask(request.Task))
         {
             if (request.DistanceAcuity is null || request.GoalDistanceAcuity is null)
             {
@@ -56,9 +65,11 @@ public static class Planner
                 Add("Enter the required equivalent power in dioptres, greater than zero, e.g. 10.");
             }
         }
-        else if (!(request.Estimates ?? EstimateInputs.None).CanEstimate(request.DistanceAcuity))
+        else if (!(request.Estimates ?? EstimateInputs.None).CanEstimate(request.DistanceAcuity, request.Task))
         {
-            Add("Enter the required equivalent power in dioptres (e.g. 10), or the measurements for an estimate: the distance acuity, the near threshold print with its test distance, or a reading curve with its test distance.");
+            Add(request.Task == ReadingTask.SpotReading
+                ? "For a spot task enter the required equivalent power in dioptres (e.g. 10), or the distance acuity, or the near threshold print with its test distance: spot tasks use threshold acuity, not the reading curve."
+                : "Enter the required equivalent power in dioptres (e.g. 10), or the measurements for an estimate: the distance acuity, the near threshold print with its test distance, or a reading curve with its test distance.");
         }
 
         var e = request.Estimates ?? EstimateInputs.None;
@@ -109,7 +120,7 @@ public static class Planner
             Add("The character pitch k must be between 0.5 and 2.0 times the x-height; 1.1 suits most book faces.");
         }
 
-        if (!(s.BlurTolerance.Dioptres is > 0 and <= 3))
+        if (!(s.BlurTolerance.Dioptres is > 0 and <= 3) && !s.BlurToleranceFollowsAcuity)
         {
             Add("The blur tolerance for depth of field must be between 0 and 3 D, e.g. 0.59.");
         }
@@ -134,33 +145,39 @@ public static class Planner
         }
 
 
-        var distanceTask = request.Task == ReadingTask.DistanceViewing;
+        var distanceTask = Ranking.IsDistanceTask(request.Task);
         EstimateComparison? comparison = null;
         ReadingCurveAnalysis? curve = null;
         PowerMethod? from = null;
-        var effective = request;
+        var reserve = TaskRules.ReserveFor(request.Task, request.Estimates?.ReserveChoice, request.Estimates?.Reserve, request.Settings.Reserves);
+        var blur = request.Settings.BlurToleranceFollowsAcuity
+            ? DepthOfFieldRule.BlurToleranceFor(request.DistanceAcuity)
+            : request.Settings.BlurTolerance;
+        var effective = request.Settings.BlurTolerance == blur ? request : request with { Settings = request.Settings with { BlurTolerance = blur } };
         if (distanceTask)
         {
-            effective = WithDistanceRequirement(request);
+            effective = WithDistanceRequirement(effective);
         }
-        else if (request.DistanceAcuity is not null || HasNearEstimateInputs(request.Estimates))
+        else if (request.DistanceAcuity is not null || HasNearEstimateInputs(request.Estimates, request.Task))
         {
-            (comparison, curve) = Estimate(request);
+            (comparison, curve) = Estimate(request, reserve!.Reserve);
             if (request.RequiredPower is null)
             {
                 var chosen = Choose(comparison) ?? throw new ArgumentException(
                     "No required-power estimate could be made" + (curve?.Refusal is { } refusal ? ": " + refusal : ".") + " Enter the required equivalent power in dioptres instead.", nameof(request));
                 from = chosen.Method;
-                effective = request with { RequiredPower = chosen.EquivalentPower };
+                effective = effective with { RequiredPower = chosen.EquivalentPower };
             }
         }
         var context = new OptionContext(effective);
-        var options = new List<MagnifierOption>(distanceTask ? 2 : 7);
-        var notConsidered = new List<NotConsidered>(distanceTask ? 6 : 2);
+        var options = new List<MagnifierOption>(distanceTask ? 3 : 8);
+        var notConsidered = new List<NotConsidered>(distanceTask ? 7 : 3);
         options.Add(MovingCloserOption.Create(context, distanceTask));
         if (distanceTask)
         {
             options.Add(DistanceTelescopeOption.Create(context, request.DistanceAcuity!.Value, request.GoalDistanceAcuity!.Value));
+            options.Add(DistanceTelescopeOption.Create(context, request.DistanceAcuity!.Value, request.GoalDistanceAcuity!.Value, spectacleMounted: true));
+            notConsidered.Add(new(OptionKind.ScreenMagnification, ScreensOnly));
             notConsidered.Add(new(OptionKind.LargePrint, NearOnly));
             notConsidered.Add(new(OptionKind.SpectacleAdd, NearOnly));
             notConsidered.Add(new(OptionKind.HandMagnifier, NearOnly));
@@ -184,7 +201,17 @@ public static class Planner
 
             options.Add(NearTelescopeOption.Create(context));
             options.Add(VideoMagnifierOption.Create(context));
+            if (request.Task == ReadingTask.Screen)
+            {
+                options.Add(ScreenMagnificationOption.Create(context));
+            }
+            else
+            {
+                notConsidered.Add(new(OptionKind.ScreenMagnification, ScreensOnly));
+            }
+
             notConsidered.Add(new(OptionKind.DistanceTelescope, DistanceOnly));
+            notConsidered.Add(new(OptionKind.SpectacleTelescope, DistanceOnly));
         }
 
         var ranked = Ranking.Rank(options, effective);
@@ -195,6 +222,8 @@ public static class Planner
             Request = request,
             RequiredPower = effective.RequiredPower!.Value,
             RequiredPowerFrom = from,
+            Reserve = reserve,
+            BlurTolerance = blur,
             Estimates = comparison,
             ReadingCurve = curve,
             Options = ranked,
@@ -205,29 +234,30 @@ public static class Planner
     }
 
     /// <summary>
-    /// The estimates the request's measurements allow: Kestenbaum (as published, and with the reserve and target), the
-    /// near-acuity method and the reading-curve method, compared pairwise (methods §2.1–2.6).
+    /// The estimates the request's measurements allow, compared like with like (methods §2.6): Kestenbaum with the
+    /// reserve and target, the near-acuity method, and (not for spot tasks) the reading-curve method are compared;
+    /// Kestenbaum as published (1M at threshold, 1:1) is kept for reference outside the comparison. Spot tasks use
+    /// threshold acuity with the spot reserve and never the critical print size (methods §11).
     /// </summary>
-    private static (EstimateComparison Comparison, ReadingCurveAnalysis? Curve) Estimate(PlanRequest request)
+    private static (EstimateComparison Comparison, ReadingCurveAnalysis? Curve) Estimate(PlanRequest request, AcuityReserve reserve)
     {
         var inputs = request.Estimates ?? EstimateInputs.None;
-        var reserve = inputs.Reserve ?? EstimateInputs.DefaultReserveFor(request.Task);
+        var spot = request.Task == ReadingTask.SpotReading;
         ReadingCurveAnalysis? curve = null;
         var acuity = request.DistanceAcuity;
         var near = inputs.NearThresholdPrint is not null && inputs.NearTestDistance is not null;
         var readingDistance = inputs.ReadingTestDistance;
-        if (readingDistance is { } rd && inputs.CriticalPrintSize is null && !inputs.ReadingPoints.IsDefaultOrEmpty)
+        if (!spot && readingDistance is { } rd && inputs.CriticalPrintSize is null && !inputs.ReadingPoints.IsDefaultOrEmpty)
         {
             curve = ReadingCurve.Analyse(rd, inputs.ReadingPoints);
         }
 
-        var fromCurve = readingDistance is not null && (inputs.CriticalPrintSize is not null || curve is { IsUsable: true });
+        var fromCurve = !spot && readingDistance is not null && (inputs.CriticalPrintSize is not null || curve is { IsUsable: true });
         // Implementation note: the estimates go into an array of their exact size that the comparison keeps as it is.
-        var estimates = new PowerEstimate[(acuity is null ? 0 : 2) + (near ? 1 : 0) + (fromCurve ? 1 : 0)];
+        var estimates = new PowerEstimate[(acuity is null ? 0 : 1) + (near ? 1 : 0) + (fromCurve ? 1 : 0)];
         var n = 0;
         if (acuity is { } a)
         {
-            estimates[n++] = KestenbaumRule.Classic(a);
             estimates[n++] = KestenbaumRule.WithReserve(a, request.TargetPrint, reserve);
         }
 
@@ -243,7 +273,8 @@ public static class Planner
                 : CriticalPrintSizeMethod.Estimate(curve!, request.TargetPrint);
         }
 
-        return (EstimateReconciliation.CompareOwned(estimates), curve);
+        var comparison = EstimateReconciliation.CompareOwned(estimates);
+        return (acuity is { } va ? comparison with { ForReference = [KestenbaumRule.Classic(va)] } : comparison, curve);
     }
 
     /// <summary>
@@ -268,14 +299,21 @@ public static class Planner
         return null;
     }
 
-    private static bool HasNearEstimateInputs(EstimateInputs? inputs) =>
-        inputs is not null && inputs.CanEstimate(null);
+    private static bool HasNearEstimateInputs(EstimateInputs? inputs, ReadingTask task) =>
+        inputs is not null && inputs.CanEstimate(null, task);
+
+    /// <summary>The message for a preferred distance outside the task's range (<see cref="TaskRules"/>), or null.</summary>
+    private static string? DistanceProblem(PlanRequest request) =>
+        request.Goal is { } goal && !Enum.IsDefined(goal) ? null : request.Rule.CheckDistance(request.PreferredDistance.Abs());
 
     /// <summary>Not considered for distance tasks.</summary>
     public const string NearOnly = "A near device: not considered for distance viewing.";
 
     /// <summary>Not considered for near tasks.</summary>
     public const string DistanceOnly = "A distance device: plan distance viewing to see it.";
+
+    /// <summary>Not considered for tasks that are not on a screen.</summary>
+    public const string ScreensOnly = "Built-in screen magnification: for screen tasks only.";
 
     /// <summary>
     /// For distance viewing, the requirement comes from the acuities: EVD = d / M with M = MAR_current / MAR_goal,
@@ -287,6 +325,25 @@ public static class Planner
         return request with { RequiredPower = Power.FromDioptres(m / request.PreferredDistance.Abs().Metres) };
     }
 
+    /// <summary>
+    /// The caution for a need beyond every optical class (no spectacle add, magnifier or telescope meets it in a
+    /// practical form), and beyond the video magnifier too, or null (methods §11 "Realistic device ranges").
+    /// </summary>
+    private static Caution? BeyondFor(List<MagnifierOption> options)
+    {
+        var optical = false;
+        var electronic = false;
+        foreach (var o in options)
+        {
+            var usable = o.IsApplicable && o.MeetsRequiredPower && o.IsPractical;
+            optical |= usable && o.Kind is OptionKind.SpectacleAdd or OptionKind.HandMagnifier or OptionKind.StandMagnifier
+                or OptionKind.NearTelescope or OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.MovingCloser;
+            electronic |= usable && o.Kind is OptionKind.VideoMagnifier or OptionKind.ScreenMagnification;
+        }
+
+        return optical ? null : electronic ? Caution.BeyondOptical : Caution.BeyondEveryDevice;
+    }
+
     private static ImmutableArray<Caution> CautionsFor(PlanRequest request, List<MagnifierOption> options, ImmutableArray<RankedOption> kit, bool accommodationEstimated, bool estimatesDisagree)
     {
         var anyLens = false;
@@ -295,10 +352,10 @@ public static class Planner
         var anyPowered = false;
         foreach (var o in options)
         {
-            anyLens |= o.LensPower is not null || o.Kind == OptionKind.DistanceTelescope;
-            anyStrong |= o.Kind is OptionKind.DistanceTelescope or OptionKind.NearTelescope || (o.LensPower is { } p && p.Dioptres >= 4);
+            anyLens |= o.LensPower is not null || o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
+            anyStrong |= o.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope or OptionKind.NearTelescope || (o.LensPower is { } p && p.Dioptres >= 4);
             anyShort |= o.WorkingDistance.Metres < 0.25;
-            anyPowered |= o.Kind == OptionKind.VideoMagnifier;
+            anyPowered |= o.Kind == OptionKind.VideoMagnifier || o is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
         }
 
         foreach (var k in kit)
@@ -306,14 +363,20 @@ public static class Planner
             anyPowered |= k.Option is HandMagnifierOption { Illuminated: true } or StandMagnifierOption { Illuminated: true };
         }
 
-        var distance = request.Task == ReadingTask.DistanceViewing;
+        var distance = Ranking.IsDistanceTask(request.Task);
+        var beyond = BeyondFor(options);
         var contrast = request.Constraints.LogContrastSensitivity is { } cs && cs < Ranking.LowContrast
             ? (cs < Ranking.VeryLowContrast ? Caution.VideoOrNonVisual : Caution.LightingAssessment)
             : null;
-        var count = 3 + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
+        var count = 3 + (beyond is null ? 0 : 1) + (estimatesDisagree ? 1 : 0) + (accommodationEstimated ? 1 : 0) + (anyLens ? 1 : 0) + (anyStrong ? 1 : 0) + (distance ? 1 : 0) + (anyShort ? 1 : 0) + (contrast is null ? 0 : 1) + (anyPowered ? 1 : 0);
         var cautions = new Caution[count];
         var n = 0;
         cautions[n++] = Caution.StartingPoint;
+        if (beyond is not null)
+        {
+            cautions[n++] = beyond;
+        }
+
         if (estimatesDisagree)
         {
             cautions[n++] = Caution.EstimatesDisagree;

@@ -37,9 +37,9 @@ public readonly record struct Acuity : IComparable<Acuity>, IFormattable
         // VAS = 100 − 50 × logMAR (DICOM PS3.17 Annex RR.2.2, after Colenbrander/ICO).
         100.0 - 50.0 * _logMar;
 
-    /// <summary>ETDRS letter score = 85 − 50 × logMAR (from memory; 20/20 = 85, 20/200 = 35).</summary>
+    /// <summary>ETDRS letter score = 85 − 50 × logMAR (Gregori, Feuer and Rosenfeld 2010, Retina 30:1046; 20/20 = 85, 20/200 = 35).</summary>
     public double EtdrsLetters =>
-        // ETDRS letters = 85 − 50 × logMAR (from memory, methods §1.1).
+        // ETDRS letters = 85 − 50 × logMAR (Gregori, Feuer and Rosenfeld 2010; methods §1.1, §11).
         85.0 - 50.0 * _logMar;
 
     /// <summary>The Snellen denominator for a given numerator (test distance): den = num × 10^logMAR.</summary>
@@ -58,7 +58,11 @@ public readonly record struct Acuity : IComparable<Acuity>, IFormattable
     public static Acuity FromVisualAcuityScore(double score) =>
         FromLogMar(LogMarOfVisualAcuityScore(Guard.Finite(score, nameof(score), "A visual acuity score", "50 for 6/60")));
 
-    /// <summary>An acuity from an ETDRS letter score, 0 to 110 (85 letters is 6/6; 35 is 6/60; from memory).</summary>
+    /// <summary>
+    /// An acuity from an ETDRS letter score, 0 to 110 (85 letters is 6/6; 35 is 6/60; Gregori, Feuer and Rosenfeld
+    /// 2010). A score of 0 is a floor (worse than the top line), so 0 gives logMAR 1.7 as a bound, not a measurement;
+    /// the parser refuses it for that reason.
+    /// </summary>
     public static Acuity FromEtdrsLetters(double letters) =>
         FromLogMar(LogMarOfEtdrsLetters(Guard.Finite(letters, nameof(letters), "An ETDRS letter score", "35 for 6/60")));
 
@@ -74,7 +78,7 @@ public readonly record struct Acuity : IComparable<Acuity>, IFormattable
 
     /// <summary>logMAR = (85 − letters) / 50, the inverse of <see cref="EtdrsLetters"/>.</summary>
     internal static double LogMarOfEtdrsLetters(double letters) =>
-        // Inverse of ETDRS letters = 85 − 50 × logMAR (from memory, methods §1.1).
+        // Inverse of ETDRS letters = 85 − 50 × logMAR (Gregori, Feuer and Rosenfeld 2010; methods §1.1).
         (85.0 - letters) / 50.0;
 
     /// <summary>An acuity from the minimum angle of resolution in arcminutes.</summary>

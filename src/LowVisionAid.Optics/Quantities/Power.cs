@@ -98,7 +98,9 @@ public readonly record struct Power : IComparable<Power>, IFormattable
 
     /// <summary>Formats as a signed value with two decimals and the unit, e.g. "+4.00 D".</summary>
     public string ToString(string? format, IFormatProvider? formatProvider) =>
-        _dioptres.ToString(string.IsNullOrEmpty(format) ? "+0.00;-0.00;0.00" : format, formatProvider) + " D";
+        // A value that rounds to zero shows as 0.00, never "-0.00"; arithmetic noise far below the shown digits is
+        // dropped first, so 4 / (0.32 × 0.8) = 15.624999… shows as the published 15.63 D (Bailey's example, methods §2.2).
+        (string.IsNullOrEmpty(format) && Math.Abs(_dioptres) < 0.005 ? 0.0 : Math.Round(_dioptres, 9)).ToString(string.IsNullOrEmpty(format) ? "+0.00;-0.00;0.00" : format, formatProvider) + " D";
 
     /// <summary>Formats with the invariant culture, e.g. "+4.00 D".</summary>
     public override string ToString() => ToString(null, CultureInfo.InvariantCulture);

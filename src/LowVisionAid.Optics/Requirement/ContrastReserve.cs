@@ -35,8 +35,13 @@ public static class ContrastReserve
     /// <summary>Assesses the contrast reserve and says what it means for reading, with the 1994 cut-offs.</summary>
     /// <param name="letterLogCs">Letter contrast sensitivity in log units, 0 to 2.5 (e.g. 1.05).</param>
     /// <param name="printContrast">The contrast of the print to be read, as a fraction from above 0 to 1; ordinary print is about 0.9.</param>
+    /// <param name="measuredAt">
+    /// What size of letters the sensitivity was measured with. Large letters (a Pelli–Robson chart, the default) give
+    /// a lower threshold than reading-size print, so the reserve is then an upper bound; a threshold measured at
+    /// reading size gives the reserve itself.
+    /// </param>
     /// <exception cref="ArgumentOutOfRangeException">A value is out of range.</exception>
-    public static ContrastReserveAssessment Assess(double letterLogCs, double printContrast = TypicalPrintContrast)
+    public static ContrastReserveAssessment Assess(double letterLogCs, double printContrast = TypicalPrintContrast, ContrastMeasuredAt measuredAt = ContrastMeasuredAt.LargeLetters)
     {
         if (!(double.IsFinite(printContrast) && printContrast is > 0 and <= 1))
         {
@@ -53,9 +58,22 @@ public static class ContrastReserve
         var thresholdLevel = threshold > VeryPoorThresholdAbove ? ContrastThresholdLevel.VeryPoor
             : threshold > PoorThresholdAbove ? ContrastThresholdLevel.Poor
             : ContrastThresholdLevel.WithinUsualRange;
-        return new ContrastReserveAssessment(letterLogCs, printContrast, threshold, reserve, reserveLevel, thresholdLevel,
-            Advise(letterLogCs, reserveLevel, thresholdLevel));
+        var advice = Advise(letterLogCs, reserveLevel, thresholdLevel);
+        var upperBound = measuredAt != ContrastMeasuredAt.ReadingSize;
+        if (upperBound)
+        {
+            advice = advice.Add(UpperBoundNote);
+        }
+
+        return new ContrastReserveAssessment(letterLogCs, printContrast, threshold, reserve, reserveLevel, thresholdLevel, advice)
+        {
+            IsUpperBound = upperBound,
+        };
     }
+
+    /// <summary>The note added when the threshold was measured with large letters.</summary>
+    public const string UpperBoundNote =
+        "Contrast sensitivity was measured with large letters (Pelli–Robson style); the contrast threshold for reading-size print is higher, so this reserve is an upper bound. A contrast threshold measured at the reading print size gives the reserve itself.";
 
     private static ImmutableArray<string> Advise(double logCs, ContrastReserveLevel reserveLevel, ContrastThresholdLevel thresholdLevel)
     {
@@ -90,6 +108,16 @@ public static class ContrastReserve
             ? value
             : throw new ArgumentOutOfRangeException(paramName, value,
                 "Enter the letter contrast sensitivity in log units from 0 to 2.5, such as 1.05.");
+}
+
+/// <summary>The letter size a contrast threshold was measured with.</summary>
+public enum ContrastMeasuredAt
+{
+    /// <summary>Large letters (a Pelli–Robson style chart): the reserve worked out is an upper bound for reading-size print.</summary>
+    LargeLetters,
+
+    /// <summary>Letters at the size of the print to be read: the reserve worked out applies to that print.</summary>
+    ReadingSize,
 }
 
 /// <summary>What the contrast reserve means for reading speed (Whittaker and Lovie-Kitchin 1994).</summary>
@@ -133,4 +161,8 @@ public sealed record ContrastReserveAssessment(
     double Reserve,
     ContrastReserveLevel ReserveLevel,
     ContrastThresholdLevel ThresholdLevel,
-    ImmutableArray<string> Advice);
+    ImmutableArray<string> Advice)
+{
+    /// <summary>True when the threshold came from large letters, so the reserve for reading-size print is at most this.</summary>
+    public bool IsUpperBound { get; init; }
+}

@@ -135,8 +135,37 @@ public static class EstimateReconciliation
             reasons[n++] = "The two estimates are for different target print sizes.";
         }
 
-        reasons[n] = "Reading can be much harder than single letters suggest when a central scotoma or unsteady fixation breaks up words; a reading test with text shows this best.";
+        reasons[n] = HarderThanLettersReason;
         return ImmutableCollectionsMarshal.AsImmutableArray(reasons);
+    }
+
+    /// <summary>The reason that applies to every gap; listed last.</summary>
+    internal const string HarderThanLettersReason =
+        "Reading can be much harder than single letters suggest when a central scotoma or unsteady fixation breaks up words; a reading test with text shows this best.";
+
+    /// <summary>The reasons for every flagged pair, each listed once, the general reason last.</summary>
+    internal static ImmutableArray<string> ReasonsOnce(ImmutableArray<EstimateDisagreement> disagreements, IFormatProvider provider)
+    {
+        if (disagreements.IsDefaultOrEmpty)
+        {
+            return [];
+        }
+
+        var seen = new HashSet<string>(StringComparer.Ordinal) { HarderThanLettersReason };
+        var reasons = new List<string>();
+        foreach (var d in disagreements)
+        {
+            foreach (var reason in ReasonsFor(d.Lower, d.Higher, provider))
+            {
+                if (seen.Add(reason))
+                {
+                    reasons.Add(reason);
+                }
+            }
+        }
+
+        reasons.Add(HarderThanLettersReason);
+        return [.. reasons];
     }
 
     private static int Count(bool condition) => condition ? 1 : 0;
@@ -155,6 +184,22 @@ public sealed record EstimateComparison(ImmutableArray<PowerEstimate> Estimates,
 {
     /// <summary>True when at least one pair is flagged.</summary>
     public bool HasDisagreement => !Disagreements.IsDefaultOrEmpty;
+
+    /// <summary>
+    /// Estimates shown for reference only, outside the comparison because they are for another target or reserve
+    /// (Kestenbaum's rule as published: 1M at threshold, 1:1). Methods §2.6: compare like with like only.
+    /// </summary>
+    public ImmutableArray<PowerEstimate> ForReference { get; init; } = [];
+
+    /// <summary>
+    /// The possible reasons for the flagged gaps, each listed once (the general reason last); empty when nothing
+    /// is flagged. Numbers in the current culture: use <see cref="FormatPossibleReasons"/> to choose.
+    /// </summary>
+    public ImmutableArray<string> PossibleReasons => FormatPossibleReasons(CultureInfo.CurrentCulture);
+
+    /// <summary>The possible reasons for the flagged gaps, each listed once, with numbers formatted for <paramref name="provider"/>.</summary>
+    public ImmutableArray<string> FormatPossibleReasons(IFormatProvider? provider) =>
+        EstimateReconciliation.ReasonsOnce(Disagreements, provider ?? CultureInfo.CurrentCulture);
 
     /// <summary>The spread between the lowest and highest estimate, in log units of Feq (0 with fewer than two).</summary>
     public double SpreadLogUnits

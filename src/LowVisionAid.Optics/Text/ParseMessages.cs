@@ -45,6 +45,10 @@ public static class ParseMessages
     public const string SnellenExpected =
         "Type a Snellen fraction as test distance / letter size, such as 6/60, 20/200 or 4/40; decimals are allowed, as in 6/7.5.";
 
+    /// <summary>Letters missed or gained on a Snellen line outside 1 to 4.</summary>
+    public const string LettersOnLineOutOfRange =
+        "Type 1 to 4 letters missed or gained on the line, such as 6/60 -2 or 6/60 +1; with 5 or more, type the next line's fraction.";
+
     /// <summary>A Snellen fraction with a zero in it.</summary>
     public const string SnellenZero =
         "Neither number of a Snellen fraction can be zero. Type a fraction such as 6/60 or 20/200.";
@@ -64,6 +68,10 @@ public static class ParseMessages
     /// <summary>A VAS outside 0 to 125.</summary>
     public const string VasOutOfRange =
         "A visual acuity score must be between 0 and 125, such as VAS 50 (6/60).";
+
+    /// <summary>An ETDRS score of 0 letters: a floor, not a measurement.</summary>
+    public const string EtdrsZeroIsAFloor =
+        "0 ETDRS letters means worse than the top line (worse than logMAR 1.7), not an acuity to calculate with. Test at a closer distance and type the fraction, such as 1/60, or record counting fingers or hand movements.";
 
     /// <summary>An ETDRS letter score outside 0 to 110.</summary>
     public const string EtdrsOutOfRange =
@@ -157,6 +165,13 @@ public static class ParseMessages
     /// <summary>Empty or unreadable near acuity: the accepted forms.</summary>
     public const string NearAcuityExpected =
         "Type the smallest print read and the distance, such as 1M at 40 cm, 1.6M @ 25cm, N8 at 25 cm, 20/50 at 40 cm or 0.40/1.0M.";
+
+    /// <summary>
+    /// A near card's Snellen label read at a distance other than the card's design distance: what it was read as,
+    /// and what to type if the card was designed for another distance.
+    /// </summary>
+    public static string NearSnellenIsAPrintSize(string label, string m, string design, string readAt) =>
+        $"On a near card, {label} names a print size for the card's design distance: read as {m} (its size on a card designed for {design}) held at {readAt}. If the card was designed for another distance (such as 14 in), type the print size in M units printed on the card, such as {m} at {readAt}.";
 
     /// <summary>A near print size or near Snellen value typed without its distance.</summary>
     public static string NearNeedsDistance(string typed) =>

@@ -15,9 +15,9 @@ public static class CalculationApi
     /// <summary>The OpenAPI document's title.</summary>
     public const string Title = "LowVisionAid calculation API";
 
+    /// <summary>The API's documents and error shapes; its handler (<see cref="QuickPlanHandler"/>) is registered with the pages'.</summary>
     public static IServiceCollection AddCalculationApi(this IServiceCollection services)
     {
-        services.AddSingleton<QuickPlanHandler>();
         services.Configure<ProblemDetailsOptions>(options => options.CustomizeProblemDetails = ApiProblems.Explain);
         services.AddOpenApi(options => options.AddDocumentTransformer((document, _, _) =>
         {

@@ -46,7 +46,9 @@ public static class CalculatorText
         OptionKind.StandMagnifier => "Stand magnifier",
         OptionKind.NearTelescope => "Near telescope (telemicroscope)",
         OptionKind.VideoMagnifier => "Video magnifier",
-        OptionKind.DistanceTelescope => "Distance telescope",
+        OptionKind.DistanceTelescope => "Hand-held distance telescope",
+        OptionKind.SpectacleTelescope => "Spectacle-mounted distance telescope",
+        OptionKind.ScreenMagnification => "Screen zoom or text size (built in)",
         _ => kind.ToString(),
     };
 }

@@ -64,6 +64,11 @@ public sealed class QuickPlanHandler
         }
 
         RequireWhenMissing(input, task, distanceAcuity, nearAcuity, target, distance, goal, errors);
+        if (task is { } kind && distance is { } typed && TaskRules.For(kind).CheckDistance(typed) is { } outOfRange)
+        {
+            errors.TryAdd(nameof(input.WorkingDistance), outOfRange);
+        }
+
         if (errors.Count > 0 || task is null || reserve is not { } readReserve || distance is null)
         {
             return new(errors, null);
@@ -86,7 +91,7 @@ public sealed class QuickPlanHandler
             GoalDistanceAcuity = goal,
             Estimates = new EstimateInputs
             {
-                Reserve = readReserve.Choice,
+                ReserveChoice = readReserve.Choice,
                 NearThresholdPrint = nearAcuity?.Threshold,
                 NearTestDistance = nearAcuity?.TestDistance,
             },
@@ -117,12 +122,19 @@ public sealed class QuickPlanHandler
             understood,
             comparison is null ? [] : [.. comparison.Estimates.Select(e => View(e, provider))],
             comparison is null ? [] : [.. comparison.Disagreements.Select(d => new DisagreementView(
-                CalculatorText.MethodName(d.Lower.Method), CalculatorText.MethodName(d.Higher.Method), d.DifferenceLogUnits, d.PowerRatio, d.PossibleReasons))],
+                CalculatorText.MethodName(d.Lower.Method), CalculatorText.MethodName(d.Higher.Method), d.DifferenceLogUnits, d.PowerRatio))],
             result.RequiredPower.Dioptres,
             basis,
             [.. result.Options.Select(o => View(o, provider))],
             [.. result.NotConsidered.Select(n => new NotConsideredView(n.Kind.ToString(), CalculatorText.OptionName(n.Kind), n.Reason))],
-            [.. result.Cautions.Select(c => new CautionView(c.Id, c.Text))]);
+            [.. result.Cautions.Select(c => new CautionView(c.Id, c.Text))])
+        {
+            ReserveUsed = result.Reserve?.Reserve.ToString(null, provider),
+            ReserveWhy = result.Reserve?.FormatWhy(provider),
+            ReferenceEstimates = comparison is null ? [] : [.. comparison.ForReference.Select(e => View(e, provider))],
+            PossibleReasons = comparison is null ? [] : comparison.FormatPossibleReasons(provider),
+            BlurToleranceDioptres = result.BlurTolerance.Dioptres,
+        };
         return new(errors, view);
     }
 
@@ -158,8 +170,8 @@ public sealed class QuickPlanHandler
         return null;
     }
 
-    /// <summary>The reserve chosen, or null in <c>Choice</c> for the task's usual reserve; null overall when unreadable.</summary>
-    private static (AcuityReserve? Choice, bool Read)? ReadReserve(string? text, Dictionary<string, string> errors)
+    /// <summary>The reserve level chosen, or null in <c>Choice</c> for the task's usual level (<see cref="TaskRules"/>); null overall when unreadable.</summary>
+    private static (ReserveLevel? Choice, bool Read)? ReadReserve(string? text, Dictionary<string, string> errors)
     {
         if (string.IsNullOrWhiteSpace(text))
         {
@@ -168,11 +180,11 @@ public sealed class QuickPlanHandler
 
         if (Enum.TryParse<ReserveChoice>(text, ignoreCase: true, out var choice) && Enum.IsDefined(choice) && !int.TryParse(text, out _))
         {
-            AcuityReserve? reserve = choice switch
+            ReserveLevel? reserve = choice switch
             {
-                ReserveChoice.Spot => AcuityReserve.Spot,
-                ReserveChoice.Fluent => AcuityReserve.Fluent,
-                ReserveChoice.Sustained => AcuityReserve.Sustained,
+                ReserveChoice.Spot => ReserveLevel.Spot,
+                ReserveChoice.Fluent => ReserveLevel.Fluent,
+                ReserveChoice.Sustained => ReserveLevel.Sustained,
                 _ => null,
             };
             return (reserve, true);
@@ -261,10 +273,16 @@ public sealed class QuickPlanHandler
             EyeToLensCm = o.EyeToLens?.Abs().Centimetres,
             LinearFieldCm = o.LinearField?.Abs().Centimetres,
             CharactersInView = o.CharactersInView,
+            LettersInView = o.LettersInView,
+            Magnification = (o as DistanceTelescopeOption)?.Magnification ?? (o as NearTelescopeOption)?.Magnification,
+            MagnificationNeeded = (o as DistanceTelescopeOption)?.MagnificationNeeded,
+            ZoomPercent = (o as ScreenMagnificationOption)?.ZoomPercent,
+            TextSizePixels = (o as ScreenMagnificationOption)?.FontSizePixels,
             DepthOfFieldCm = o.DepthOfField?.Abs().Centimetres,
             BothEyesPossible = o.Binocular.Feasible,
             ConvergenceDemandPrismDioptres = o.Binocular.ConvergenceDemand,
-            BaseInPrismDioptres = o.Binocular.BaseInPrismRule,
+            BaseInPrismEachEyeDioptres = o.Binocular.BaseInPrismEachEye,
+            ConvergenceLeftAfterPrismDioptres = o.Binocular.BaseInPrismEachEye is null ? null : o.Binocular.ResidualConvergence,
             AccommodationOrAddNeededDioptres = o.AccommodationOrAddNeeded.Dioptres,
             HandsFree = o.HandsFree,
             SuitsTremor = o.SuitsTremor,

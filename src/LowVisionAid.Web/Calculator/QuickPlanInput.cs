@@ -19,8 +19,9 @@ public sealed class QuickPlanInput
     public string? WorkingDistance { get; set; }
 
     /// <summary>
-    /// How far above threshold the print should be: UsualForTask (the default: spot reading 1:1, sustained reading 3:1,
-    /// writing and screens 2:1), Spot (1:1), Fluent (2:1) or Sustained (3:1).
+    /// How far above threshold the print should be: UsualForTask (the default, from the optics core's task rule: spot
+    /// reading 1:1 on threshold acuity; reading, writing and screens 2:1), Spot (1:1), Fluent (2:1) or Sustained (3:1,
+    /// an explicit choice for long or high-speed reading).
     /// </summary>
     public string? Reserve { get; set; } = nameof(ReserveChoice.UsualForTask);
 
@@ -55,6 +56,6 @@ public enum ReserveChoice
     /// <summary>2:1, for fluent reading (Cheong, Lovie-Kitchin and Bowers 2002).</summary>
     Fluent,
 
-    /// <summary>3:1, for high-fluent, sustained reading.</summary>
+    /// <summary>3:1, for long or high-speed reading (Whittaker and Lovie-Kitchin 1993); only when chosen.</summary>
     Sustained,
 }

@@ -7,7 +7,7 @@ namespace LowVisionAid.Web.Calculator;
 /// <param name="MethodVersion">The version of the methods behind the figures.</param>
 /// <param name="Understood">Each input as the calculator read it, so typing mistakes show.</param>
 /// <param name="Estimates">The required equivalent power by each method that had its inputs (empty for distance viewing).</param>
-/// <param name="Disagreements">Pairs of estimates more than 0.2 log units apart, with the usual reasons.</param>
+/// <param name="Disagreements">Pairs of like-for-like estimates more than 0.2 log units apart (reasons in <see cref="QuickPlanView.PossibleReasons"/>).</param>
 /// <param name="PlannedForDioptres">The equivalent power the options were worked out for.</param>
 /// <param name="PlanBasis">Which estimate (or acuity ratio) the options use, in words.</param>
 /// <param name="Options">The options, first choice first, with every figure and the reasons for its place.</param>
@@ -22,7 +22,23 @@ public sealed record QuickPlanView(
     string PlanBasis,
     IReadOnlyList<OptionView> Options,
     IReadOnlyList<NotConsideredView> NotConsidered,
-    IReadOnlyList<CautionView> Cautions);
+    IReadOnlyList<CautionView> Cautions)
+{
+    /// <summary>The acuity reserve the estimates used ("2:1"); null for distance viewing.</summary>
+    public string? ReserveUsed { get; init; }
+
+    /// <summary>Why that reserve was used, with its source; null for distance viewing.</summary>
+    public string? ReserveWhy { get; init; }
+
+    /// <summary>Estimates shown for reference only, outside the comparison (Kestenbaum at threshold, 1M at 1:1; methods §2.6).</summary>
+    public IReadOnlyList<EstimateView> ReferenceEstimates { get; init; } = [];
+
+    /// <summary>The possible reasons for the disagreements, each listed once; empty when the estimates agree.</summary>
+    public IReadOnlyList<string> PossibleReasons { get; init; } = [];
+
+    /// <summary>The blur tolerance the depths of focus were worked out with, D (from the acuity unless set).</summary>
+    public double BlurToleranceDioptres { get; init; }
+}
 
 /// <param name="Field">The input's name (as in <see cref="QuickPlanInput"/>).</param>
 /// <param name="Label">The input's label.</param>
@@ -55,8 +71,7 @@ public sealed record EstimateView(
 /// <param name="Higher">The method asking for more.</param>
 /// <param name="DifferenceLogUnits">log₁₀(Feq higher / Feq lower).</param>
 /// <param name="PowerRatio">Feq higher / Feq lower.</param>
-/// <param name="PossibleReasons">The usual reasons for such a gap.</param>
-public sealed record DisagreementView(string Lower, string Higher, double DifferenceLogUnits, double PowerRatio, IReadOnlyList<string> PossibleReasons);
+public sealed record DisagreementView(string Lower, string Higher, double DifferenceLogUnits, double PowerRatio);
 
 /// <summary>One option with every figure the engine gives. Null figures do not apply to this kind of device.</summary>
 public sealed record OptionView
@@ -79,10 +94,16 @@ public sealed record OptionView
     public double? EyeToLensCm { get; init; }
     public double? LinearFieldCm { get; init; }
     public double? CharactersInView { get; init; }
+    public int? LettersInView { get; init; }
+    public double? Magnification { get; init; }
+    public double? MagnificationNeeded { get; init; }
+    public double? ZoomPercent { get; init; }
+    public double? TextSizePixels { get; init; }
     public double? DepthOfFieldCm { get; init; }
     public required bool BothEyesPossible { get; init; }
     public required double ConvergenceDemandPrismDioptres { get; init; }
-    public double? BaseInPrismDioptres { get; init; }
+    public double? BaseInPrismEachEyeDioptres { get; init; }
+    public double? ConvergenceLeftAfterPrismDioptres { get; init; }
     public required double AccommodationOrAddNeededDioptres { get; init; }
     public required bool HandsFree { get; init; }
     public required bool SuitsTremor { get; init; }

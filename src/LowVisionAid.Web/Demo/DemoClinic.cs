@@ -1,5 +1,6 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Web.Pages.Plans;

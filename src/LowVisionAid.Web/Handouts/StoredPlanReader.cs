@@ -5,6 +5,7 @@ using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
+using LowVisionAid.Optics.Requirement;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Summaries;
@@ -249,7 +250,7 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             Text(goal, "Title") ?? "",
             target,
             Number(inputs, "NearThresholdM") is { } t && t > 0 ? PrintSize.FromM(t) : null,
-            ReserveFor(inputGoal, inputs),
+            ReserveFor(goal),
             Number(inputs, "NearTestDistanceMetres") is { } d && d > 0 ? Distance.FromMetres(d) : null,
             Power.FromDioptres(power.Value),
             working.Value,
@@ -291,15 +292,19 @@ public sealed class StoredPlanReader(ClinicDbContext db)
         }
     }
 
-    private static AcuityReserve ReserveFor(JsonElement inputGoal, JsonElement inputs)
+    /// <summary>
+    /// The reserve the stored plan used: the goal's recorded reserve (plans from method 2026.12.2 on), else the reserve
+    /// of its first estimate with one (older plans, whose first row was Kestenbaum at 1:1 for 1M, are read past it),
+    /// else 2:1. The plan is read as it was made, never re-derived from today's rule.
+    /// </summary>
+    private static AcuityReserve ReserveFor(JsonElement goal)
     {
-        var name = Text(inputGoal, "Task") switch
-        {
-            "MedicationLabels" or "Phone" => "SpotReserve",
-            "Book" => "SustainedReserve",
-            _ => "FluentReserve",
-        };
-        return Number(inputs, name) is { } r && r is >= 1 and <= AcuityReserve.MaximumRatio ? AcuityReserve.FromRatio(r) : AcuityReserve.Fluent;
+        var text = Text(goal, "Reserve")
+            ?? Array(goal, "Estimates").Where(e => Text(e, "Method") != PlanBuilder.MethodLabel(PowerMethod.KestenbaumClassic))
+                .Select(e => Text(e, "Reserve")).FirstOrDefault(r => r is not null && r.EndsWith(":1", StringComparison.Ordinal));
+        return text is not null && double.TryParse(text.AsSpan(0, text.Length - 2), NumberStyles.Float, Invariant, out var r) && r is >= 1 and <= AcuityReserve.MaximumRatio
+            ? AcuityReserve.FromRatio(r)
+            : AcuityReserve.Fluent;
     }
 
     private static List<SummaryInput> Inputs(JsonElement inputs, bool imperial)

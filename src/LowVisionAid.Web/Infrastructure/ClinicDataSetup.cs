@@ -1,41 +1,50 @@
 using LowVisionAid.Data;
+using LowVisionAid.Data.Backup;
 using LowVisionAid.Web.Demo;
-using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Options;
 
 namespace LowVisionAid.Web.Infrastructure;
 
-/// <summary>The database: where its file lives, how it is opened, and what happens to it at start.</summary>
+/// <summary>The database: where its files live, how it is opened, its backups, and what happens to it at start.</summary>
 internal static class ClinicDataSetup
 {
-    /// <summary>Configuration key for the folder that holds the database file; default <c>&lt;content root&gt;/data</c>.</summary>
-    public const string DataFolderKey = "DataFolder";
-
-    /// <summary>Configuration key that turns off loading the demo clinic into an empty database.</summary>
-    public const string LoadDemoKey = "LoadDemoClinic";
+    public const string FolderProblem =
+        "DataFolder or BackupFolder is not a folder path. Give a folder such as D:\\LowVisionAid\\data or /srv/lowvisionaid/data, or leave it empty for the default.";
 
     public static WebApplicationBuilder AddClinicData(this WebApplicationBuilder builder)
     {
-        var folder = builder.Configuration[DataFolderKey];
-        folder = string.IsNullOrWhiteSpace(folder)
-            ? Path.Combine(builder.Environment.ContentRootPath, "data")
-            : Path.GetFullPath(folder, builder.Environment.ContentRootPath);
-        var connectionString = ClinicDatabase.ConnectionStringFor(folder);
+        var services = builder.Services;
+        services.AddOptions<ClinicDataOptions>()
+            .Bind(builder.Configuration)
+            .Validate(o => o.FoldersAreValid(), FolderProblem)
+            .ValidateOnStart();
+        services.AddSingleton(sp => ClinicFolders.Resolve(sp.GetRequiredService<IOptions<ClinicDataOptions>>().Value, sp.GetRequiredService<IHostEnvironment>().ContentRootPath));
+        services.AddSingleton(TimeProvider.System);
 
-        builder.Services.AddSingleton(TimeProvider.System);
-        builder.Services.AddDbContext<ClinicDbContext>(options => options.UseClinicSqlite(connectionString));
-        builder.Services.AddScoped<DemoClinic>();
+        // Options built once: the connection string (and the data folder it creates) does not change while the app runs.
+        services.AddDbContext<ClinicDbContext>(
+            (sp, options) => options.UseClinicSqlite(sp.GetRequiredService<ClinicFolders>().ConnectionString),
+            optionsLifetime: ServiceLifetime.Singleton);
+        services.AddScoped(sp =>
+        {
+            var folders = sp.GetRequiredService<ClinicFolders>();
+            return new DatabaseBackups(folders.DatabaseFile, folders.Backups, sp.GetRequiredService<TimeProvider>());
+        });
+        services.AddScoped<DemoClinic>();
+        services.AddScoped<DatabaseStartUp>();
         return builder;
     }
 
-    /// <summary>Applies pending migrations, then loads the demo clinic when the database is empty.</summary>
+    /// <summary>
+    /// The database start-up, once per start, before the first request: the settings are checked, then under the
+    /// start-up lock the database is backed up (if a migration is due), migrated, given its roles, and loaded with the
+    /// demo clinic when it is new and <see cref="ClinicDataOptions.LoadDemoClinic"/> is on.
+    /// </summary>
     public static async Task PrepareClinicDatabaseAsync(this WebApplication app)
     {
-        await using var scope = app.Services.CreateAsyncScope();
-        var db = scope.ServiceProvider.GetRequiredService<ClinicDbContext>();
-        await db.UpgradeAsync().ConfigureAwait(false);
-        if (app.Configuration.GetValue(LoadDemoKey, defaultValue: true))
-        {
-            await scope.ServiceProvider.GetRequiredService<DemoClinic>().LoadIntoEmptyDatabaseAsync(CancellationToken.None).ConfigureAwait(false);
-        }
+        ArgumentNullException.ThrowIfNull(app);
+        app.Services.GetRequiredService<IStartupValidator>().Validate();
+        var loadDemo = app.Services.GetRequiredService<IOptions<ClinicDataOptions>>().Value.LoadDemoClinic;
+        await DatabaseStartUp.RunAsync(app.Services, loadDemo, app.Lifetime.ApplicationStopping).ConfigureAwait(false);
     }
 }

@@ -17,6 +17,23 @@ internal static partial class Readings
     /// <summary>A distance acuity in any notation the core reads (6/60, 20/200, 0.1 decimal, 1.0 logMAR, VAS, letters).</summary>
     public static ParseResult<Acuity> Acuity(string text) => DistanceAcuityNotation.Parse(text, Invariant);
 
+    /// <summary>
+    /// A recorded vision level: a chart acuity (its value) or counting fingers, hand movements, light perception or no
+    /// light perception (recorded as typed, with no value: never used in a calculation). Fails with the acuity message.
+    /// </summary>
+    public static ParseResult<Acuity?> RecordedVision(string text)
+    {
+        var acuity = Acuity(text);
+        if (acuity.Success)
+        {
+            return ParseResult.Ok<Acuity?>(acuity.Value);
+        }
+
+        return NonChartVisionNotation.Parse(text, Invariant).Success
+            ? ParseResult.Ok<Acuity?>(null)
+            : ParseResult.Fail<Acuity?>(acuity.Error!);
+    }
+
     /// <summary>A print size in M, N, points, Jaeger (with a warning) or millimetres of x-height.</summary>
     public static ParseResult<PrintSize> PrintSize(string text) => PrintSizeNotation.Parse(text, Invariant);
 

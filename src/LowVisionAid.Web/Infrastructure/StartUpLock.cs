@@ -15,7 +15,7 @@ namespace LowVisionAid.Web.Infrastructure;
 /// database, which the OS releases when its process dies however it dies. While it is held no other start of the app
 /// can be migrating this database, so a migration lock row found then was left by a killed start: it is removed.
 /// </remarks>
-internal sealed partial class StartUpLock : IAsyncDisposable
+internal sealed class StartUpLock : IAsyncDisposable
 {
     /// <summary>The name of EF Core's migration lock table on SQLite (one table for every context in the file).</summary>
     public const string MigrationLockTable = "__EFMigrationsLock";
@@ -32,13 +32,6 @@ internal sealed partial class StartUpLock : IAsyncDisposable
     private StartUpLock(FileStream file) => _file = file;
 
     /// <summary>Takes the start-up lock of the clinic database, then removes a migration lock left by a killed start.</summary>
-    public static Task<StartUpLock> TakeAsync(WebApplication app)
-    {
-        ArgumentNullException.ThrowIfNull(app);
-        return TakeAsync(app.Services, app.Logger, app.Lifetime.ApplicationStopping);
-    }
-
-    /// <summary>The same, for a command that upgrades the database without starting the server (create-admin).</summary>
     public static async Task<StartUpLock> TakeAsync(IServiceProvider services, ILogger logger, CancellationToken ct)
     {
         ArgumentNullException.ThrowIfNull(services);
@@ -57,7 +50,7 @@ internal sealed partial class StartUpLock : IAsyncDisposable
             var released = await RemoveAbandonedMigrationLockAsync(databasePath).ConfigureAwait(false);
             if (released > 0)
             {
-                LogReleased(logger);
+                AppLog.MigrationLockReleased(logger);
             }
 
             return new StartUpLock(file);
@@ -120,7 +113,4 @@ internal sealed partial class StartUpLock : IAsyncDisposable
         delete.CommandText = $"DELETE FROM \"{MigrationLockTable}\"";
         return await delete.ExecuteNonQueryAsync().ConfigureAwait(false);
     }
-
-    [LoggerMessage(Level = LogLevel.Warning, Message = "An earlier start was stopped while it migrated the database; its migration lock was released.")]
-    private static partial void LogReleased(ILogger logger);
 }

@@ -3,7 +3,7 @@ namespace LowVisionAid.Web.Security;
 /// <summary>
 /// Who may reach the app, from configuration section <c>Access</c>. By default the app listens on 127.0.0.1 only
 /// and needs no sign-in (one PC, one person at a time). <see cref="AllowLan"/> is the explicit setting that lets it
-/// listen on a network address, and then sign-in is always required.
+/// listen on a network address, and then sign-in is always required. Bound as options at start (SecuritySetup).
 /// </summary>
 public sealed class AccessSettings
 {
@@ -18,13 +18,13 @@ public sealed class AccessSettings
     /// <summary>True when every page except sign-in and static files needs a signed-in user.</summary>
     public bool SignInRequired => RequireSignIn || AllowLan;
 
+    /// <summary>
+    /// The section bound as the options are (<c>IOptions&lt;AccessSettings&gt;</c>), for the one decision made before
+    /// the services exist: whether the configured addresses may be listened on (<see cref="NetworkExposure"/>).
+    /// </summary>
     public static AccessSettings From(IConfiguration configuration)
     {
         ArgumentNullException.ThrowIfNull(configuration);
-        return new AccessSettings
-        {
-            AllowLan = configuration.GetValue($"{Section}:{nameof(AllowLan)}", defaultValue: false),
-            RequireSignIn = configuration.GetValue($"{Section}:{nameof(RequireSignIn)}", defaultValue: false),
-        };
+        return configuration.GetSection(Section).Get<AccessSettings>() ?? new AccessSettings();
     }
 }

@@ -80,11 +80,7 @@ internal static class CreateAdminCommand
             return Usage;
         }
 
-        var logger = root.GetRequiredService<ILoggerFactory>().CreateLogger(typeof(CreateAdminCommand));
-        await using (await StartUpLock.TakeAsync(root, logger, ct).ConfigureAwait(false))   // as at start: frees a migration lock a killed start left
-        {
-            await SecuritySetup.PrepareDatabaseAsync(root).ConfigureAwait(false);
-        }
+        await DatabaseStartUp.RunAsync(root, loadDemo: false, ct).ConfigureAwait(false);   // as at start, under the start-up lock
 
         await using var scope = root.CreateAsyncScope();
         var users = scope.ServiceProvider.GetRequiredService<UserManager<IdentityUser>>();

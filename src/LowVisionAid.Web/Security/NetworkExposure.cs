@@ -58,15 +58,21 @@ internal static class NetworkExposure
             || (IPAddress.TryParse(host, out var address) && IPAddress.IsLoopback(address));
     }
 
-    /// <summary>Throws with <see cref="RefusalMessage"/> when a configured address is not loopback and the LAN is not allowed.</summary>
+    /// <summary>Throws with <see cref="Refusal"/> when a configured address is not loopback and the LAN is not allowed.</summary>
     public static void Validate(IConfiguration configuration, AccessSettings settings)
+    {
+        if (Refusal(configuration, settings) is { } refusal)
+        {
+            throw new InvalidOperationException(refusal);
+        }
+    }
+
+    /// <summary><see cref="RefusalMessage"/> with the network addresses, when the app must not start; otherwise null.</summary>
+    public static string? Refusal(IConfiguration configuration, AccessSettings settings)
     {
         ArgumentNullException.ThrowIfNull(settings);
         var exposed = ConfiguredUrls(configuration).Where(u => !IsLoopbackUrl(u)).ToList();
-        if (exposed.Count > 0 && !settings.AllowLan)
-        {
-            throw new InvalidOperationException(RefusalMessage + " Network address: " + string.Join(", ", exposed) + ".");
-        }
+        return exposed.Count > 0 && !settings.AllowLan ? RefusalMessage + " Network address: " + string.Join(", ", exposed) + "." : null;
     }
 
     /// <summary>True when the request came over loopback (or from inside the process, with no network address).</summary>

@@ -1,25 +1,26 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Audit;
-using LowVisionAid.Data.Backup;
+using LowVisionAid.Web.Infrastructure;
 using Microsoft.AspNetCore.Authorization;
+using Microsoft.AspNetCore.DataProtection;
+using Microsoft.AspNetCore.DataProtection.KeyManagement;
+using Microsoft.AspNetCore.DataProtection.Repositories;
 using Microsoft.AspNetCore.Identity;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
-using Microsoft.Data.Sqlite;
-using Microsoft.EntityFrameworkCore;
-using Microsoft.EntityFrameworkCore.Infrastructure;
+using Microsoft.Extensions.Options;
 
 namespace LowVisionAid.Web.Security;
 
 /// <summary>
-/// Network exposure, sign-in and roles, security headers, the audit trail, and backups (including the automatic one
-/// taken before any migration). Program.cs calls each piece once.
+/// Network exposure, sign-in and roles, the keys that protect the cookies, security headers and the audit trail.
+/// Program.cs calls each piece once.
 /// </summary>
 internal static class SecuritySetup
 {
-    /// <summary>Configuration key for the backup folder; default <c>&lt;data folder&gt;/backups</c>.</summary>
-    public const string BackupFolderKey = "BackupFolder";
+    /// <summary>The Data Protection application name: cookies stay valid across restarts and content roots.</summary>
+    public const string KeyRingName = "LowVisionAid";
 
     /// <summary>The answer to a form that could not be accepted at all (400).</summary>
     public const string BadRequestMessage =
@@ -32,26 +33,21 @@ internal static class SecuritySetup
         NetworkExposure.Validate(builder.Configuration, settings);
         builder.WebHost.ConfigureKestrel(o => o.AddServerHeader = false);
         var services = builder.Services;
-        services.AddSingleton(settings);
+        services.AddOptions<AccessSettings>().BindConfiguration(AccessSettings.Section).ValidateOnStart();
+        services.AddSingleton(sp => sp.GetRequiredService<IOptions<AccessSettings>>().Value);
         services.AddHttpContextAccessor();
 
-        // Request lines carry search text (?q=…), which may be a client's name or code: keep them out of the log.
-        builder.Logging.AddFilter("Microsoft.AspNetCore.Hosting.Diagnostics", LogLevel.Warning);
+        // The keys that protect the sign-in and form cookies live in the data folder, so a restart (or a move of the
+        // folder to another PC) keeps people signed in and open forms valid.
+        services.AddDataProtection().SetApplicationName(KeyRingName);
+        services.AddOptions<KeyManagementOptions>().Configure<ClinicFolders, ILoggerFactory>((o, folders, logs) =>
+            o.XmlRepository = new FileSystemXmlRepository(new DirectoryInfo(folders.Keys), logs));
 
         // Audit trail: one line per record saved through the clinic context, in the same transaction.
         services.AddSingleton<IAuditActor, HttpAuditActor>();
         services.AddSingleton<AuditInterceptor>();
         services.ConfigureDbContext<ClinicDbContext>((sp, options) => options.AddInterceptors(sp.GetRequiredService<AuditInterceptor>()));
         services.AddScoped<AuditTrail>();
-        services.AddScoped(sp =>
-        {
-            var path = new SqliteConnectionStringBuilder(ClinicConnectionString(sp)).DataSource;
-            var configured = sp.GetRequiredService<IConfiguration>()[BackupFolderKey];
-            var folder = string.IsNullOrWhiteSpace(configured)
-                ? Path.Combine(Path.GetDirectoryName(Path.GetFullPath(path))!, "backups")
-                : Path.GetFullPath(configured, builder.Environment.ContentRootPath);
-            return new DatabaseBackups(path, folder, sp.GetRequiredService<TimeProvider>());
-        });
 
         // Sign-in: ASP.NET Core Identity on EF Core (PBKDF2-hashed passwords, lockout after repeated failures).
         services.AddIdentity<IdentityUser, IdentityRole>(o =>
@@ -66,7 +62,8 @@ internal static class SecuritySetup
                 o.Lockout.AllowedForNewUsers = true;
                 o.User.RequireUniqueEmail = false;
             })
-            .AddEntityFrameworkStores<ClinicDbContext>();
+            .AddEntityFrameworkStores<ClinicDbContext>()
+            .AddSignInManager<ClinicSignInManager>();   // logs refused sign-ins
         services.ConfigureApplicationCookie(o =>
         {
             o.Cookie.Name = "LowVisionAid.SignIn";
@@ -79,6 +76,7 @@ internal static class SecuritySetup
             o.ExpireTimeSpan = TimeSpan.FromHours(8);
             o.SlidingExpiration = true;
         });
+        services.AddSessionChecks();   // sign-out, a password change or a disabled account ends every session (SessionChecks)
         services.AddAntiforgery(o =>
         {
             o.Cookie.Name = "LowVisionAid.Form";
@@ -89,10 +87,13 @@ internal static class SecuritySetup
         services.AddAuthorizationBuilder()
             .AddPolicy(ClinicPolicies.Administer, p => p.AddRequirements(new ClinicRoleRequirement([.. ClinicRoleHandler.RolesFor(ClinicPolicies.Administer)])))
             .AddPolicy(ClinicPolicies.ExportOrDelete, p => p.AddRequirements(new ClinicRoleRequirement([.. ClinicRoleHandler.RolesFor(ClinicPolicies.ExportOrDelete)])));
-        if (settings.SignInRequired)
+        services.AddOptions<AuthorizationOptions>().Configure<AccessSettings>((o, access) =>
         {
-            services.Configure<AuthorizationOptions>(o => o.FallbackPolicy = new AuthorizationPolicyBuilder().RequireAuthenticatedUser().Build());
-        }
+            if (access.SignInRequired)
+            {
+                o.FallbackPolicy = new AuthorizationPolicyBuilder().RequireAuthenticatedUser().Build();
+            }
+        });
 
         services.Configure<RazorPagesOptions>(o =>
         {
@@ -139,46 +140,7 @@ internal static class SecuritySetup
         return app;
     }
 
-    /// <summary>
-    /// Before any migration: a backup of an existing database that has a migration to apply (or still has the earlier
-    /// separate access history). Then the schema is upgraded (<see cref="ClinicDatabase.UpgradeAsync"/>) and the three
-    /// roles exist. Runs before the demo clinic is loaded.
-    /// </summary>
-    public static async Task PrepareAccessDatabaseAsync(this WebApplication app)
-    {
-        ArgumentNullException.ThrowIfNull(app);
-        await PrepareDatabaseAsync(app.Services).ConfigureAwait(false);
-    }
-
-    /// <inheritdoc cref="PrepareAccessDatabaseAsync"/>
-    public static async Task PrepareDatabaseAsync(IServiceProvider root)
-    {
-        await using var scope = root.CreateAsyncScope();
-        var services = scope.ServiceProvider;
-        var clinic = services.GetRequiredService<ClinicDbContext>();
-        var backups = services.GetRequiredService<DatabaseBackups>();
-        BackupFile? taken = null;
-        if (File.Exists(backups.DatabasePath) && new FileInfo(backups.DatabasePath).Length > 0)
-        {
-            var hasSchema = (await clinic.Database.GetAppliedMigrationsAsync().ConfigureAwait(false)).Any();
-            var pending = (await clinic.Database.GetPendingMigrationsAsync().ConfigureAwait(false)).Any();
-            if (hasSchema && pending)
-            {
-                taken = backups.Create("before-migration");
-            }
-        }
-
-        await clinic.UpgradeAsync().ConfigureAwait(false);
-        await EnsureRolesAsync(services.GetRequiredService<RoleManager<IdentityRole>>()).ConfigureAwait(false);
-        if (taken is not null)
-        {
-            await services.GetRequiredService<AuditTrail>().RecordAsync(AuditAction.BackedUp, "Database", null, "Before migration: " + taken.Name, CancellationToken.None, AuditActors.System).ConfigureAwait(false);
-        }
-    }
-
-    /// <summary>Every migration a restored backup may record (this build's, and the earlier separate access history's).</summary>
-    public static IReadOnlySet<string> KnownMigrations(ClinicDbContext clinic) => clinic.KnownMigrations();
-
+    /// <summary>The three roles exist (at start, after a restore, before an account is made).</summary>
     public static async Task EnsureRolesAsync(RoleManager<IdentityRole> roles)
     {
         ArgumentNullException.ThrowIfNull(roles);
@@ -190,8 +152,4 @@ internal static class SecuritySetup
             }
         }
     }
-
-    private static string ClinicConnectionString(IServiceProvider services) =>
-        RelationalOptionsExtension.Extract(services.GetRequiredService<DbContextOptions<ClinicDbContext>>()).ConnectionString
-        ?? throw new InvalidOperationException("The clinic database has no connection string.");
 }

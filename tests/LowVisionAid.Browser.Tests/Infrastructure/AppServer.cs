@@ -1,29 +1,31 @@
 using System.Net;
+using LowVisionAid.TestSupport;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Hosting.Server;
 using Microsoft.AspNetCore.Hosting.Server.Features;
-using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Extensions.DependencyInjection;
 
 namespace LowVisionAid.Browser.Tests.Infrastructure;
 
 /// <summary>
-/// The app on real Kestrel at 127.0.0.1 on a free port, with its own data folder (and so its own SQLite file) in a
-/// temp folder. One per test class (<c>IClassFixture&lt;AppServer&gt;</c>), so classes never share records.
+/// The app on real Kestrel at 127.0.0.1 on a free port, with its own data folder (its own SQLite file, copied from
+/// the migrated template) and the demo clinic. One per collection: every class in <see cref="BrowserTestGroup"/>
+/// shares it, so each test makes records with codes of its own and never changes the demo clinic's. A class that
+/// still declares <c>IClassFixture&lt;AppServer&gt;</c> gets a server of its own.
 /// </summary>
-public sealed class AppServer : WebApplicationFactory<Program>
+public sealed class AppServer : ClinicHost
 {
-    private readonly string _dataFolder = Path.Combine(Path.GetTempPath(), "lva-browser-" + Guid.NewGuid().ToString("N"));
     private Uri? _baseAddress;
 
     public AppServer()
     {
-        Directory.CreateDirectory(_dataFolder);
+        // Not Development: the friendly error pages are what a clinic sees, so they are what we test.
+        EnvironmentName = "Testing";
+        LoadDemo = true;
+        // Tells Program.cs an address is configured, so it does not claim the default port 5080.
+        Settings = new Dictionary<string, string?> { ["urls"] = "http://127.0.0.1:0" };
         UseKestrel(options => options.Listen(IPAddress.Loopback, 0));
     }
-
-    /// <summary>The folder that holds this server's database.</summary>
-    public string DataFolder => _dataFolder;
 
     /// <summary>The address the browser should open, e.g. http://127.0.0.1:41234/.</summary>
     public Uri BaseAddress
@@ -46,28 +48,8 @@ public sealed class AppServer : WebApplicationFactory<Program>
 
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
-        // Not Development: the friendly error pages are what a clinic sees, so they are what we test.
-        builder.UseEnvironment("Testing");
-        // Tells Program.cs an address is configured, so it does not claim the default port 5080.
-        builder.UseSetting("urls", "http://127.0.0.1:0");
-        // The clinic's data folder (the web branch's ClinicDataSetup.DataFolderKey): this class's own SQLite file.
-        builder.UseSetting("DataFolder", _dataFolder);
+        ArgumentNullException.ThrowIfNull(builder);
+        base.ConfigureWebHost(builder);
         builder.ConfigureServices(services => services.AddSingleton<IStartupFilter, FaultInjection>());
-    }
-
-    protected override void Dispose(bool disposing)
-    {
-        base.Dispose(disposing);
-        if (disposing)
-        {
-            try
-            {
-                Directory.Delete(_dataFolder, recursive: true);
-            }
-            catch (IOException)
-            {
-                // A file still open on a slow file system; the temp folder is cleaned by the OS.
-            }
-        }
     }
 }

@@ -1,8 +1,15 @@
 namespace LowVisionAid.Browser.Tests.Infrastructure;
 
-/// <summary>Where screenshots go: test-artifacts/screenshots/ at the repository root (git ignores it).</summary>
+/// <summary>
+/// Screenshots, in test-artifacts/screenshots/ at the repository root (git ignores it). A test names its steps with
+/// <see cref="ScreenshotAsync"/>; the picture is taken only when the test fails (<see cref="BrowserTest"/> takes the
+/// last named step's page then), or at every step when LVA_SCREENSHOTS=all (for looking the pages over).
+/// </summary>
 public static class Artifacts
 {
+    /// <summary>Set to "all" to save a screenshot at every named step, failing or not.</summary>
+    public const string ScreenshotsVariable = "LVA_SCREENSHOTS";
+
     private static readonly Lazy<string> Screenshots = new(() =>
     {
         var folder = Path.Combine(FindRepositoryRoot(), "test-artifacts", "screenshots");
@@ -24,20 +31,66 @@ public static class Artifacts
         }
         """;
 
-    /// <summary>Saves a full-page screenshot under a readable name and returns its path; the page stays scrolled as it was.</summary>
+    private static (IPage Page, string Name, bool FullPage)? _lastStep;
+
+    public static bool EveryStep => string.Equals(Environment.GetEnvironmentVariable(ScreenshotsVariable), "all", StringComparison.OrdinalIgnoreCase);
+
+    /// <summary>
+    /// Names a step and returns where its screenshot goes. The picture is saved now only when LVA_SCREENSHOTS=all;
+    /// otherwise only if the test fails after this step. The page stays scrolled as it was.
+    /// </summary>
     public static async Task<string> ScreenshotAsync(IPage page, string name, bool fullPage = true)
     {
         ArgumentNullException.ThrowIfNull(page);
+        var path = PathFor(name);
+        _lastStep = (page, name, fullPage);
+        if (EveryStep)
+        {
+            await CaptureAsync(page, path, fullPage);
+        }
+
+        return path;
+    }
+
+    /// <summary>Forgets the last step (a new test starts).</summary>
+    internal static void StartTest() => _lastStep = null;
+
+    /// <summary>Saves a screenshot of the failing test's last named step's page (or <paramref name="fallback"/>).</summary>
+    internal static async Task<string?> CaptureFailureAsync(IPage? fallback, string testClass)
+    {
+        var (page, name, fullPage) = _lastStep ?? (fallback!, testClass, true);
+        if (page is null || page.IsClosed)
+        {
+            return null;
+        }
+
+        var path = PathFor("failed-" + name);
+        try
+        {
+            await CaptureAsync(page, path, fullPage);
+            return path;
+        }
+        catch (PlaywrightException)
+        {
+            // The page is gone with the failure (a crashed or closed context): nothing to picture.
+            return null;
+        }
+    }
+
+    private static string PathFor(string name)
+    {
         var safe = string.Concat(name.Select(c => char.IsLetterOrDigit(c) || c is '-' or '_' ? c : '-'));
-        var path = Path.Combine(Screenshots.Value, safe + ".png");
+        return Path.Combine(Screenshots.Value, safe + ".png");
+    }
+
+    private static async Task CaptureAsync(IPage page, string path, bool fullPage)
+    {
         var scroll = fullPage ? await page.EvaluateAsync<double[]>("() => [window.scrollX, window.scrollY]") : null;
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = path, FullPage = fullPage });
         if (scroll is not null)
         {
             await page.EvaluateAsync(RestoreScroll, scroll);
         }
-
-        return path;
     }
 
     private static string FindRepositoryRoot()

@@ -72,8 +72,8 @@ public sealed class BrowserSession : IAsyncLifetime
 }
 
 [CollectionDefinition(Name)]
-public sealed class BrowserTestGroup : ICollectionFixture<BrowserSession>
+public sealed class BrowserTestGroup : ICollectionFixture<BrowserSession>, ICollectionFixture<AppServer>
 {
-    /// <summary>Every browser test class joins this collection, so they share one chromium and run one at a time.</summary>
+    /// <summary>Every browser test class joins this collection, so they share one chromium and one app server and run one at a time.</summary>
     public const string Name = "Browser";
 }

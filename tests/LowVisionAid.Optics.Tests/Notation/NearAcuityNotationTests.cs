@@ -42,12 +42,48 @@ public class NearAcuityNotationTests
         // CV-31 (methods §6, "divide by three"): 6/24 at 25 cm → threshold letter 1.454 mm = 1M ≈ N8.
         // Source: derived; UK optometry rule. Exact: ±0.001 mm and ±0.001 M; N8 under the 1M ≈ 8 pt rule
         // (methods §1.3: 1M = 8.25 pt at r_x 0.50, ±0.05).
-        var near = Read("6/24 at 25 cm");
-        Tolerance.Within(1.454, near.Threshold.XHeightMillimetres, 0.001, "x-height mm");
-        Tolerance.Within(1.0, near.Threshold.M, 0.001, "M");
-        Tolerance.Within(8.25, near.Threshold.ToPoints(XHeightRatio.Conventional), 0.05, "points");
+        // The rule is about a distance acuity of 6/24 taken to 25 cm. (Before, "6/24 at 25 cm" typed as a near
+        // acuity was read this way; a near card's Snellen label names a print size for the card's design distance
+        // instead (Colenbrander 2001), so the check now uses the distance acuity directly, as the rule does.)
+        var threshold = Acuity.FromSnellen(6, 24).ThresholdPrintAt(Distance.FromCentimetres(25));
+        Tolerance.Within(1.454, threshold.XHeightMillimetres, 0.001, "x-height mm");
+        Tolerance.Within(1.0, threshold.M, 0.001, "M");
+        Tolerance.Within(8.25, threshold.ToPoints(XHeightRatio.Conventional), 0.05, "points");
         // N8 at r_x 0.50 is 8 × 0.35278 × 0.50 / 1.4544 = 0.970M (methods §1.3, derived; ±0.001), so 1M ≈ N8 within 3 %.
         Tolerance.Within(0.970, PrintSizeNotation.Parse("N8", Invariant).Value.M, 0.001, "N8 in M");
+    }
+
+    [Fact]
+    public void A_near_card_Snellen_label_names_a_print_size_for_the_card_design_distance()
+    {
+        // Colenbrander 2001 (methods §1.2, §11): on a near card designed for 40 cm, "20/50" labels the print whose
+        // letters subtend 5′ × 2.5 at 40 cm: M = 0.40 × 50/20 = 1.0M (derived, exact). Held at 25 cm it is still
+        // 1.0M, so the near acuity is 1.0M at 25 cm (logMAR log₁₀(1.0/0.25) = 0.602), not 0.625M at 25 cm.
+        var result = NearAcuityNotation.Parse("20/50 at 25 cm", Invariant);
+        Assert.True(result.Success, result.Error);
+        Tolerance.Within(1.0, result.Value.Threshold.M, 1e-9, "M");
+        Tolerance.Within(0.25, result.Value.TestDistance.Metres, 1e-12, "test distance");
+        Tolerance.Within(0.602, result.Value.Acuity.LogMar, 0.0005, "logMAR");
+        // The reader is asked to confirm: M units, or the card's design distance.
+        Assert.Equal(ParseMessages.NearSnellenIsAPrintSize("20/50", "1.0M", "40 cm", "25 cm"), result.Warning);
+    }
+
+    [Fact]
+    public void A_near_card_designed_for_14_inches_converts_by_its_own_design_distance()
+    {
+        // Colenbrander 2001: 20/50 on a 14 in (35.56 cm) card is M = 0.3556 × 2.5 = 0.889M (derived).
+        var result = NearAcuityNotation.Parse("20/50 at 25 cm", Invariant, XHeightRatio.Conventional, Distance.FromInches(14));
+        Assert.True(result.Success, result.Error);
+        Tolerance.Within(0.889, result.Value.Threshold.M, 0.001, "M");
+    }
+
+    [Fact]
+    public void A_near_card_read_at_its_design_distance_gives_no_warning()
+    {
+        // Colenbrander 2001: 20/50 at 40 cm on a 40 cm card is 1.0M at 40 cm (derived, exact); nothing to question.
+        var result = NearAcuityNotation.Parse("20/50 at 40 cm", Invariant);
+        Tolerance.Within(1.0, result.Value.Threshold.M, 1e-9, "M");
+        Assert.Null(result.Warning);
     }
 
     [Theory]

@@ -8,7 +8,8 @@ namespace LowVisionAid.Optics.Tests.Notation;
 /// <summary>Round-trip and robustness properties over generated values (CsCheck).</summary>
 public class NotationPropertyTests
 {
-    private const int Many = 5_000;
+    // CsCheck_Iter (10,000 in the full run, scripts/test.sh); CsCheck's default of 100 in the fast loop.
+    private static long Many => Check.Iter;
 
     private static readonly CultureInfo[] Cultures =
     [
@@ -134,7 +135,7 @@ public class NotationPropertyTests
             AssertValueOrMessage(PrintSizeNotation.Parse(text, culture), text);
             AssertValueOrMessage(DistanceNotation.Parse(text, culture), text);
             AssertValueOrMessage(NonChartVisionNotation.Parse(text, culture), text);
-        }, iter: 10_000);
+        }, iter: Many);
 
     [Fact]
     public void Lone_surrogates_and_control_characters_give_a_message()

@@ -42,7 +42,7 @@ public class OptionRulesTests
             DistanceAcuity = Acuity.FromSnellen(6, 60),
             GoalDistanceAcuity = Acuity.FromSnellen(6, 12),
         });
-        var t = Find<DistanceTelescopeOption>(plan);
+        var t = plan.Options.Select(r => r.Option).OfType<DistanceTelescopeOption>().Single(o => !o.SpectacleMounted);
         Tolerance.WithinRelative(5.0, t.MagnificationNeeded, Rel);
         Tolerance.WithinRelative(6.0, t.Magnification, Rel);
         Assert.Equal(TelescopeDesign.Keplerian, t.Design);
@@ -53,17 +53,28 @@ public class OptionRulesTests
         Tolerance.WithinRelative(60.0, closer.WorkingDistance.Centimetres, Rel);
         Tolerance.WithinRelative(5.0, closer.RelativeMagnification, Rel);
         Assert.True(closer.MeetsRequiredPower);
-        Assert.Equal(OptionKind.DistanceTelescope, plan.Options[0].Option.Kind);
-        Assert.Equal(6, plan.NotConsidered.Length);
+        // Sitting closer first where it meets the goal (methods §11; Ryan and Margrain 2006; changed with issue 10, which
+        // declares a hand-held telescope above sitting closer wrong). At 60 cm a presbyope needs 1/0.6 = 1.67 D: +1.75 D add.
+        Assert.Equal(OptionKind.MovingCloser, plan.Options[0].Option.Kind);
+        Tolerance.WithinRelative(1.667, closer.FocusNeeded.Dioptres, Rel);
+        Tolerance.Within(1.75, closer.AddNeeded.Dioptres, 1e-9);
+        Assert.Equal(7, plan.NotConsidered.Length);
         Assert.Contains(Caution.Driving, plan.Cautions);
         Assert.Contains("walking", t.Summary(CultureInfo.InvariantCulture), StringComparison.Ordinal);
+        // A hand-held telescope is one eye (methods §11); a spectacle-mounted one stops at 4×, short of the 5× needed.
+        Assert.False(t.Binocular.Feasible);
+        var mounted = plan.Options.Select(r => r.Option).OfType<DistanceTelescopeOption>().Single(o => o.SpectacleMounted);
+        Assert.Equal(OptionKind.SpectacleTelescope, mounted.Kind);
+        Assert.False(mounted.IsPractical);
     }
 
     [Fact]
     public void A_tremor_puts_the_stand_magnifier_above_the_hand_magnifier()
     {
-        var steady = Planner.Build(Base());
-        var shaky = Planner.Build(Base(Client with { Tremor = true }));
+        // Spot reading with one useful eye, so neither the long-reading rule nor binocular geometry decides: the hand lens
+        // (eye to page 35 cm) is nearer the preferred 40 cm than the stand (21 cm) until a tremor is entered.
+        var steady = Planner.Build(Base(Client with { UsefulEyes = 1 }, task: ReadingTask.SpotReading));
+        var shaky = Planner.Build(Base(Client with { UsefulEyes = 1, Tremor = true }, task: ReadingTask.SpotReading));
         Assert.True(PositionOf(steady, OptionKind.HandMagnifier) < PositionOf(steady, OptionKind.StandMagnifier));
         Assert.True(PositionOf(shaky, OptionKind.StandMagnifier) < PositionOf(shaky, OptionKind.HandMagnifier));
         Assert.Contains(new RankingReason(RankingRule.NoSteadyHand, false), shaky.Options.Single(r => r.Option.Kind == OptionKind.HandMagnifier).Reasons);
@@ -75,7 +86,7 @@ public class OptionRulesTests
         var plan = Planner.Build(Base(Client with { UsefulEyes = 1 }));
         var add = Find<SpectacleAddOption>(plan);
         Assert.True(add.OneEyeOnly);
-        Assert.Null(add.Binocular.BaseInPrismRule);
+        Assert.Null(add.Binocular.BaseInPrismEachEye);
         Assert.Equal(0, add.Binocular.ConvergenceDemand);
         Assert.All(plan.Options, r => Assert.DoesNotContain(r.Reasons, x => x.Rule == RankingRule.BothEyes));
     }
@@ -153,9 +164,10 @@ public class OptionRulesTests
     [Fact]
     public void Fewer_than_four_letters_in_view_warns_that_fluent_reading_is_unlikely()
     {
-        // Hand lens 40 D (rounded from 40), 50 mm at 25 cm: y = 0.05/(0.265 × 40) = 4.72 mm → 2.95 letters of 1M < 4.
+        // Hand lens 40 D, 25 mm (DeviceRanges at +40 D) at 25 cm: y = 0.025/(0.265 × 40) = 2.36 mm → 1.47 letters of 1M < 4.
         var o = Find<HandMagnifierOption>(Planner.Build(Base(required: 40)));
-        Tolerance.WithinRelative(2.95, o.CharactersInView!.Value, 0.01);
+        Tolerance.WithinRelative(1.47, o.CharactersInView!.Value, 0.01);
+        Assert.Contains("1 letter in view", o.Summary(CultureInfo.InvariantCulture), StringComparison.Ordinal);
         Assert.Equal(FluencyWarning.FewerThanFour, o.Fluency);
         Assert.NotNull(MagnifierOption.FluencyText(o.Fluency));
     }

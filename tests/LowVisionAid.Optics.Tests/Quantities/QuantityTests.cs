@@ -130,4 +130,15 @@ public class QuantityTests
         Assert.Equal("+4,00 D", Power.FromDioptres(4).ToString(null, CultureInfo.GetCultureInfo("de-DE")));
         Assert.Equal("25.0 cm", Distance.FromCentimetres(25).ToString());
     }
+
+    [Fact]
+    public void A_power_shows_its_published_rounding_whatever_the_order_of_the_arithmetic()
+    {
+        // Bailey's example (methods §2.2): 4M read at 32 cm, target 0.8M, no reserve → F_eq = 15.625 D, shown 15.63 D
+        // (published). The method's floating-point result lies a hair either side of 15.625; it must show as 15.63 D.
+        var estimate = LowVisionAid.Optics.Requirement.NearAcuityMethod.Estimate(PrintSize.FromM(4), Distance.FromCentimetres(32), PrintSize.FromM(0.8), AcuityReserve.Spot);
+        Assert.Equal("+15.63 D", estimate.EquivalentPower.ToString());
+        Assert.Equal("+15.63 D", Power.FromDioptres(15.624999999999996).ToString());
+        Assert.Equal("0.00 D", Power.FromDioptres(-0.001).ToString());
+    }
 }

@@ -90,6 +90,44 @@ public sealed class AppProcess : IDisposable
         return app;
     }
 
+    /// <summary>
+    /// Runs the app with <paramref name="args"/> (after the data folder) until it exits by itself, at most
+    /// <paramref name="timeout"/> (then it is killed and the result says so): for starts that must refuse.
+    /// </summary>
+    public static async Task<(int? ExitCode, string Output)> RunToExitAsync(string dataFolder, IEnumerable<string> args, TimeSpan timeout)
+    {
+        var dll = WebAssemblyPath();
+        var start = new ProcessStartInfo("dotnet")
+        {
+            WorkingDirectory = Path.GetDirectoryName(dll)!,
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            UseShellExecute = false,
+        };
+        foreach (var arg in new[] { dll, "--DataFolder", dataFolder }.Concat(args))
+        {
+            start.ArgumentList.Add(arg);
+        }
+
+        start.Environment["ASPNETCORE_ENVIRONMENT"] = "Production";
+        using var process = Process.Start(start)!;
+        var output = process.StandardOutput.ReadToEndAsync();
+        var error = process.StandardError.ReadToEndAsync();
+        using var limit = new CancellationTokenSource(timeout);
+        try
+        {
+            await process.WaitForExitAsync(limit.Token);
+        }
+        catch (OperationCanceledException)
+        {
+            process.Kill(entireProcessTree: true);
+            await process.WaitForExitAsync();
+            return (null, await output + await error);
+        }
+
+        return (process.ExitCode, await output + await error);
+    }
+
     public async Task WaitUntilReadyAsync(TimeSpan timeout)
     {
         using var http = new HttpClient { BaseAddress = Address, Timeout = TimeSpan.FromSeconds(5) };

@@ -1,37 +1,33 @@
-using System.Collections.Concurrent;
 using Microsoft.Extensions.Logging;
+using Microsoft.Extensions.Logging.Testing;
 
 namespace LowVisionAid.Reliability.Tests.Support;
 
-/// <summary>Every log line the app writes, with its category, formatted message and exception text.</summary>
+/// <summary>
+/// Every log line the app writes (the framework's fake log collector), each as one line: level, category, formatted
+/// message, the structured values (a structured sink would store them), the scopes and the exception text.
+/// </summary>
 public sealed class CapturedLogs : ILoggerProvider
 {
-    private readonly ConcurrentQueue<string> _lines = new();
+    private readonly FakeLoggerProvider _provider;
 
-    public IReadOnlyCollection<string> Lines => _lines;
-
-    public ILogger CreateLogger(string categoryName) => new Logger(categoryName, _lines);
-
-    public void Dispose()
+    public CapturedLogs()
     {
+        _provider = new FakeLoggerProvider(Collector);
     }
 
-    private sealed class Logger(string category, ConcurrentQueue<string> lines) : ILogger
+    public FakeLogCollector Collector { get; } = new();
+
+    public IReadOnlyCollection<string> Lines => Collector.GetSnapshot().Select(Line).ToList();
+
+    public ILogger CreateLogger(string categoryName) => _provider.CreateLogger(categoryName);
+
+    public void Dispose() => _provider.Dispose();
+
+    private static string Line(FakeLogRecord record)
     {
-        public IDisposable? BeginScope<TState>(TState state)
-            where TState : notnull
-        {
-            lines.Enqueue($"{category} scope: {state}");
-            return null;
-        }
-
-        public bool IsEnabled(LogLevel logLevel) => true;
-
-        public void Log<TState>(LogLevel logLevel, EventId eventId, TState state, Exception? exception, Func<TState, Exception?, string> formatter)
-        {
-            // The state's structured values are included too, since a structured sink would store them.
-            var values = state is IEnumerable<KeyValuePair<string, object?>> pairs ? string.Join("; ", pairs.Select(p => $"{p.Key}={p.Value}")) : "";
-            lines.Enqueue($"{logLevel} {category}: {formatter(state, exception)} [{values}] {exception}");
-        }
+        var values = record.StructuredState is { } pairs ? string.Join("; ", pairs.Select(p => $"{p.Key}={p.Value}")) : "";
+        var scopes = record.Scopes.Count == 0 ? "" : " scopes: " + string.Join("; ", record.Scopes);
+        return $"{record.Level} {record.Category}: {record.Message} [{values}]{scopes} {record.Exception}";
     }
 }

@@ -1,25 +1,28 @@
-using Microsoft.AspNetCore.Hosting;
-using Microsoft.AspNetCore.Mvc.Testing;
+using LowVisionAid.TestSupport;
 using Microsoft.Extensions.DependencyInjection;
-using Microsoft.Extensions.Logging;
 
 namespace LowVisionAid.Reliability.Tests.Support;
 
 /// <summary>
 /// The real app in process (Production environment, so no developer error pages) over its own SQLite file in a temp
-/// folder, with every log line captured.
+/// folder, with every log line captured. A fresh folder starts from the migrated template database
+/// (<see cref="TemplateDatabase"/>); a folder the test prepared keeps the database it holds.
 /// </summary>
-public sealed class ClinicApp : WebApplicationFactory<Program>
+public sealed class ClinicApp : ClinicHost
 {
-    private readonly bool _loadDemo;
-    private readonly IReadOnlyDictionary<string, string?> _settings;
-
     public ClinicApp(string purpose, bool loadDemo = true, IReadOnlyDictionary<string, string?>? settings = null, TempFolder? data = null)
+        : this(data ?? new TempFolder(purpose), ownsData: data is null, loadDemo, settings)
     {
-        _loadDemo = loadDemo;
-        _settings = settings ?? new Dictionary<string, string?>();
-        OwnsData = data is null;
-        Data = data ?? new TempFolder(purpose);
+    }
+
+    private ClinicApp(TempFolder data, bool ownsData, bool loadDemo, IReadOnlyDictionary<string, string?>? settings)
+        : base(data.Path)
+    {
+        Data = data;
+        OwnsData = ownsData;
+        LoadDemo = loadDemo;
+        Settings = settings ?? new Dictionary<string, string?>();
+        LogCollector = Logs.Collector;
     }
 
     public TempFolder Data { get; }
@@ -28,37 +31,20 @@ public sealed class ClinicApp : WebApplicationFactory<Program>
 
     private bool OwnsData { get; }
 
-    public FormClient NewClient() => new(CreateClient(new WebApplicationFactoryClientOptions { AllowAutoRedirect = false, HandleCookies = true }));
+    public FormClient NewClient() => new(NewBrowserClient());
 
     public T Service<T>(Func<IServiceProvider, T> use)
     {
+        ArgumentNullException.ThrowIfNull(use);
         using var scope = Services.CreateScope();
         return use(scope.ServiceProvider);
     }
 
     public async Task<T> ServiceAsync<T>(Func<IServiceProvider, Task<T>> use)
     {
+        ArgumentNullException.ThrowIfNull(use);
         await using var scope = Services.CreateAsyncScope();
         return await use(scope.ServiceProvider);
-    }
-
-    protected override void ConfigureWebHost(IWebHostBuilder builder)
-    {
-        builder.UseEnvironment("Production");
-        builder.UseSetting("DataFolder", Data.Path);
-        builder.UseSetting("LoadDemoClinic", _loadDemo ? "true" : "false");
-        foreach (var (key, value) in _settings)
-        {
-            builder.UseSetting(key, value);
-        }
-
-        // Only the capture sees every line (Debug and up); the console stays quiet so the runs stay fast.
-        builder.ConfigureLogging(logging =>
-        {
-            logging.ClearProviders();
-            logging.SetMinimumLevel(LogLevel.Debug);
-            logging.AddProvider(Logs);
-        });
     }
 
     protected override void Dispose(bool disposing)

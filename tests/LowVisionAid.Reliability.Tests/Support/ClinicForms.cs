@@ -1,5 +1,6 @@
 using System.Net;
 using System.Text.RegularExpressions;
+using LowVisionAid.TestSupport;
 
 namespace LowVisionAid.Reliability.Tests.Support;
 
@@ -30,11 +31,7 @@ public static partial class ClinicForms
     }
 
     /// <summary>The error summary and field errors of a page that came back with errors.</summary>
-    public static string Problems(string html) =>
-        string.Join(" | ", ProblemPattern().Matches(html).Select(m => WebUtility.HtmlDecode(Regex.Replace(m.Groups[1].Value, "<[^>]+>", " ", RegexOptions.None, TimeSpan.FromSeconds(1))).Trim()));
-
-    [GeneratedRegex("class=\"(?:field-error|error-summary)[^\"]*\"[^>]*>(.*?)</(?:p|div)>", RegexOptions.Singleline)]
-    private static partial Regex ProblemPattern();
+    public static string Problems(string html) => string.Join(" | ", PageHtml.Texts(html, ".field-error, .error-summary"));
 
     [GeneratedRegex("/Visits/([0-9]+)")]
     private static partial Regex VisitIdPattern();

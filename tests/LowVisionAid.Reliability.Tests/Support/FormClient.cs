@@ -1,12 +1,12 @@
 using System.Net;
-using System.Text.RegularExpressions;
+using LowVisionAid.TestSupport;
 
 namespace LowVisionAid.Reliability.Tests.Support;
 
 /// <summary>A browser-like client: keeps cookies, GETs a form first and posts it back with its antiforgery token.</summary>
-public sealed partial class FormClient(HttpClient http) : IDisposable
+public sealed class FormClient(HttpClient http) : IDisposable
 {
-    public const string TokenField = "__RequestVerificationToken";
+    public const string TokenField = PageHtml.TokenField;
 
     public HttpClient Http { get; } = http;
 
@@ -39,16 +39,9 @@ public sealed partial class FormClient(HttpClient http) : IDisposable
         return await Http.PostAsync(new Uri(target, UriKind.Relative), content);
     }
 
-    public static string? Token(string html)
-    {
-        var match = TokenPattern().Match(html);
-        return match.Success ? WebUtility.HtmlDecode(match.Groups[1].Value) : null;
-    }
+    public static string? Token(string html) => PageHtml.Token(html);
 
     public static string Shorten(string text) => text.Length <= 600 ? text : text[..600] + "…";
 
     public void Dispose() => Http.Dispose();
-
-    [GeneratedRegex("<input[^>]*name=\"__RequestVerificationToken\"[^>]*value=\"([^\"]+)\"")]
-    private static partial Regex TokenPattern();
 }

@@ -1,53 +1,21 @@
-using System.Net;
-using System.Text.RegularExpressions;
+using LowVisionAid.TestSupport;
 
 namespace LowVisionAid.Reliability.Tests.Support;
 
 /// <summary>The values a browser would send for a form as it is shown (inputs, checked boxes, selected options, text areas).</summary>
-public static partial class FormFields
+public static class FormFields
 {
+    /// <summary>
+    /// The first form whose attribute text (e.g. <c>method="post" action="/Clients/New"</c>) passes
+    /// <paramref name="formFilter"/>; the layout's sign-out form (on every page when signed in) is never the form under test.
+    /// </summary>
     public static List<KeyValuePair<string, string>> Read(string html, Func<string, bool>? formFilter = null)
     {
-        // The layout's sign-out form (on every page when signed in) is never the form under test.
-        var form = FormPattern().Matches(html)
-            .Where(m => !m.Groups[1].Value.Contains("action=\"/Account/SignOut\"", StringComparison.Ordinal))
-            .FirstOrDefault(m => formFilter?.Invoke(m.Groups[1].Value) ?? true)
+        var form = PageHtml.Forms(html)
+            .Where(f => !f.Action.Equals("/Account/SignOut", StringComparison.Ordinal))
+            .FirstOrDefault(f => formFilter?.Invoke(f.Attributes) ?? true)
             ?? throw new InvalidOperationException("No matching form on the page.");
-        var body = form.Groups[2].Value;
-        var fields = new List<KeyValuePair<string, string>>();
-        foreach (Match input in InputPattern().Matches(body))
-        {
-            var attributes = input.Groups[1].Value;
-            var type = Html.Attribute(attributes, "type") ?? "text";
-            if (Html.Attribute(attributes, "name") is not { } name || type is "submit" or "button" or "file" || (type is "checkbox" or "radio" && !attributes.Contains("checked", StringComparison.Ordinal)))
-            {
-                continue;
-            }
-
-            fields.Add(new(name, Html.Attribute(attributes, "value") ?? (type == "checkbox" ? "on" : "")));
-        }
-
-        foreach (Match select in SelectPattern().Matches(body))
-        {
-            if (Html.Attribute(select.Groups[1].Value, "name") is not { } name)
-            {
-                continue;
-            }
-
-            var options = OptionPattern().Matches(select.Groups[2].Value);
-            var chosen = options.FirstOrDefault(o => o.Groups[1].Value.Contains("selected", StringComparison.Ordinal)) ?? options.FirstOrDefault();
-            fields.Add(new(name, chosen is null ? "" : Html.Attribute(chosen.Groups[1].Value, "value") ?? WebUtility.HtmlDecode(chosen.Groups[2].Value)));
-        }
-
-        foreach (Match area in TextAreaPattern().Matches(body))
-        {
-            if (Html.Attribute(area.Groups[1].Value, "name") is { } name)
-            {
-                fields.Add(new(name, WebUtility.HtmlDecode(area.Groups[2].Value).TrimStart('\r', '\n')));
-            }
-        }
-
-        return fields;
+        return [.. form.Fields];
     }
 
     /// <summary>Replaces (or adds) the named fields' values.</summary>
@@ -62,19 +30,4 @@ public static partial class FormFields
 
         return fields;
     }
-
-    [GeneratedRegex("<form\\b([^>]*)>(.*?)</form>", RegexOptions.Singleline | RegexOptions.IgnoreCase)]
-    private static partial Regex FormPattern();
-
-    [GeneratedRegex("<input\\b([^>]*)>", RegexOptions.IgnoreCase)]
-    private static partial Regex InputPattern();
-
-    [GeneratedRegex("<select\\b([^>]*)>(.*?)</select>", RegexOptions.Singleline | RegexOptions.IgnoreCase)]
-    private static partial Regex SelectPattern();
-
-    [GeneratedRegex("<option\\b([^>]*)>(.*?)</option>", RegexOptions.Singleline | RegexOptions.IgnoreCase)]
-    private static partial Regex OptionPattern();
-
-    [GeneratedRegex("<textarea\\b([^>]*)>(.*?)</textarea>", RegexOptions.Singleline | RegexOptions.IgnoreCase)]
-    private static partial Regex TextAreaPattern();
 }

@@ -1,9 +1,6 @@
+using Microsoft.Extensions.Time.Testing;
+
 namespace LowVisionAid.Web.Tests.Support;
 
-/// <summary>A clock stopped at one instant, in UTC.</summary>
-public sealed class FixedClock(DateTimeOffset now) : TimeProvider
-{
-    public override DateTimeOffset GetUtcNow() => now;
-
-    public override TimeZoneInfo LocalTimeZone => TimeZoneInfo.Utc;
-}
+/// <summary>A clock stopped at one instant, in UTC: the framework's fake clock, which never moves unless told to.</summary>
+public sealed class FixedClock(DateTimeOffset now) : FakeTimeProvider(now);

@@ -1,5 +1,5 @@
 using System.Net;
-using System.Text.RegularExpressions;
+using LowVisionAid.TestSupport;
 
 namespace LowVisionAid.Web.Tests.Support;
 
@@ -7,7 +7,7 @@ namespace LowVisionAid.Web.Tests.Support;
 /// Posts a form the way a browser does: GET the page first (the client keeps the antiforgery cookie), then post
 /// every hidden field it rendered (the token, a record's version) together with what the test types.
 /// </summary>
-public static partial class Forms
+public static class Forms
 {
     public static async Task<HttpResponseMessage> SubmitAsync(this HttpClient client, string formUrl, IReadOnlyDictionary<string, string> typed, string? postUrl = null)
     {
@@ -34,28 +34,5 @@ public static partial class Forms
         return await client.PostAsync(new Uri(postUrl, UriKind.Relative), content);
     }
 
-    public static Dictionary<string, string> HiddenFields(string html)
-    {
-        var fields = new Dictionary<string, string>(StringComparer.Ordinal);
-        foreach (Match input in HiddenInput().Matches(html))
-        {
-            var name = NameAttribute().Match(input.Value);
-            var value = ValueAttribute().Match(input.Value);
-            if (name.Success)
-            {
-                fields[WebUtility.HtmlDecode(name.Groups[1].Value)] = value.Success ? WebUtility.HtmlDecode(value.Groups[1].Value) : "";
-            }
-        }
-
-        return fields;
-    }
-
-    [GeneratedRegex("<input[^>]*type=\"hidden\"[^>]*>")]
-    private static partial Regex HiddenInput();
-
-    [GeneratedRegex("name=\"([^\"]*)\"")]
-    private static partial Regex NameAttribute();
-
-    [GeneratedRegex("value=\"([^\"]*)\"")]
-    private static partial Regex ValueAttribute();
+    public static Dictionary<string, string> HiddenFields(string html) => PageHtml.HiddenFields(html);
 }

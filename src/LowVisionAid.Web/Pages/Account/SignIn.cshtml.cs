@@ -13,10 +13,19 @@ public sealed class SignInInput
     public string Password { get; set; } = "";
 }
 
-public sealed class SignInModel(SignInManager<IdentityUser> signIn, UserManager<IdentityUser> users, AuditTrail audit) : PageModel
+/// <remarks>
+/// Every refused sign-in gets the same words, whether the name is unknown, the password wrong or the account locked or
+/// disabled, and the same work: for an unknown name (and a locked account, which Identity refuses before it checks the
+/// password) a password is still hashed, so neither the answer nor its time tells whether an account exists.
+/// </remarks>
+public sealed class SignInModel(SignInManager<IdentityUser> signIn, UserManager<IdentityUser> users, IPasswordHasher<IdentityUser> hasher, AuditTrail audit) : PageModel
 {
-    public const string WrongNameOrPassword = "The user name or password is not right. Check both and try again; after 5 failed tries the account is locked for 15 minutes.";
-    public const string LockedOut = "This account is locked after repeated failed sign-ins. Try again in 15 minutes, or ask an administrator to unlock it.";
+    public const string Refused =
+        "The user name or password is not right, or the account is locked. Check both and try again. After 5 failed tries an account " +
+        "is locked for 15 minutes; an administrator can unlock it sooner.";
+
+    private static readonly IdentityUser NoOne = new("no-such-account");
+    private static string? _noOnesHash;
 
     [BindProperty]
     public SignInInput Input { get; set; } = new();
@@ -46,8 +55,16 @@ public sealed class SignInModel(SignInManager<IdentityUser> signIn, UserManager<
         }
 
         var name = Input.UserName.Trim();
-        var result = await signIn.PasswordSignInAsync(name, Input.Password, isPersistent: false, lockoutOnFailure: true).ConfigureAwait(false);
         var user = await users.FindByNameAsync(name).ConfigureAwait(false);
+        // An unknown name goes through the name overload, which refuses it (and logs that no account has that name).
+        var result = user is null
+            ? await signIn.PasswordSignInAsync(name, Input.Password, isPersistent: false, lockoutOnFailure: true).ConfigureAwait(false)
+            : await signIn.PasswordSignInAsync(user, Input.Password, isPersistent: false, lockoutOnFailure: true).ConfigureAwait(false);
+        if (user is null || result.IsLockedOut)
+        {
+            HashAnyway(Input.Password);
+        }
+
         if (result.Succeeded)
         {
             await audit.RecordAsync(AuditAction.SignedIn, "User", null, null, ct, name).ConfigureAwait(false);
@@ -56,8 +73,15 @@ public sealed class SignInModel(SignInManager<IdentityUser> signIn, UserManager<
 
         // Only a known user's name goes in the trail; anything typed for an unknown name stays out of it.
         await audit.RecordAsync(result.IsLockedOut ? AuditAction.LockedOut : AuditAction.SignInFailed, "User", null, null, ct, user?.UserName ?? "unknown user name").ConfigureAwait(false);
-        ModelState.AddModelError("", result.IsLockedOut ? LockedOut : WrongNameOrPassword);
+        ModelState.AddModelError("", Refused);
         Input.Password = "";
         return Page();
+    }
+
+    // The same PBKDF2 work a known account's password check does.
+    private void HashAnyway(string password)
+    {
+        _noOnesHash ??= hasher.HashPassword(NoOne, Guid.NewGuid().ToString("N"));
+        hasher.VerifyHashedPassword(NoOne, _noOnesHash, password);
     }
 }

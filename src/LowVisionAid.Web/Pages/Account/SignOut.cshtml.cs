@@ -1,3 +1,4 @@
+using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Identity;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
@@ -12,7 +13,7 @@ public sealed class SignOutModel(SignInManager<IdentityUser> signIn) : PageModel
 
     public async Task<IActionResult> OnPostAsync()
     {
-        await signIn.SignOutAsync().ConfigureAwait(false);
+        await SessionChecks.SignOutEverywhereAsync(signIn, User).ConfigureAwait(false);
         return LocalRedirect("/Account/SignIn");
     }
 }

@@ -86,8 +86,12 @@ public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic)
             }
             finally
             {
+                // Reading a file SQLite left in WAL mode makes its -wal and -shm beside it: they go too.
                 Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
-                System.IO.File.Delete(temp);
+                foreach (var leftover in new[] { temp, temp + "-wal", temp + "-shm", temp + "-journal" })
+                {
+                    System.IO.File.Delete(leftover);
+                }
             }
         }
 
@@ -95,7 +99,7 @@ public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic)
         return Page();
     }
 
-    public IReadOnlySet<string> Known => SecuritySetup.KnownMigrations(clinic);
+    public IReadOnlySet<string> Known => clinic.KnownMigrations();
 
     private void Report(RestoreCheck result, string success)
     {

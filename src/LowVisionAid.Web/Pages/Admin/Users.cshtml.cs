@@ -8,7 +8,10 @@ using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Pages.Admin;
 
-public sealed record UserRow(string Id, string UserName, string Roles, bool LockedOut, int FailedTries);
+public sealed record UserRow(string Id, string UserName, string Roles, bool LockedOut, int FailedTries, bool Disabled)
+{
+    public string State => Disabled ? "Disabled by an administrator" : LockedOut ? "Locked after failed sign-ins" : FailedTries > 0 ? $"{FailedTries} failed tries" : "Active";
+}
 
 public sealed class UsersModel(UserManager<IdentityUser> users, NewAccountHandler handler, AuditTrail audit, AccessSettings settings, TimeProvider clock) : PageModel
 {
@@ -58,6 +61,33 @@ public sealed class UsersModel(UserManager<IdentityUser> users, NewAccountHandle
         return Page();
     }
 
+    /// <summary>
+    /// Disables an account: it cannot sign in until an administrator unlocks it, and every session it has (a copied
+    /// sign-in cookie too) ends at its next request, because its security stamp changes (<see cref="SessionChecks"/>).
+    /// </summary>
+    public async Task<IActionResult> OnPostDisableAsync(string id, CancellationToken ct)
+    {
+        var user = await users.FindByIdAsync(id).ConfigureAwait(false);
+        if (user is null)
+        {
+            return NotFound();
+        }
+
+        if (string.Equals(user.Id, users.GetUserId(User), StringComparison.Ordinal))
+        {
+            ModelState.AddModelError("", "You cannot disable the account you are signed in with; ask another administrator.");
+        }
+        else
+        {
+            await SessionChecks.DisableAsync(users, user).ConfigureAwait(false);
+            await audit.RecordAsync(AuditAction.Changed, "User", null, "Disabled account " + user.UserName, ct).ConfigureAwait(false);
+            Done = "Account " + user.UserName + " disabled; it is signed out everywhere.";
+        }
+
+        await LoadAsync(ct).ConfigureAwait(false);
+        return Page();
+    }
+
     private async Task LoadAsync(CancellationToken ct)
     {
         var rows = new List<UserRow>();
@@ -65,7 +95,7 @@ public sealed class UsersModel(UserManager<IdentityUser> users, NewAccountHandle
         foreach (var user in await users.Users.OrderBy(u => u.UserName).ToListAsync(ct).ConfigureAwait(false))
         {
             var roles = await users.GetRolesAsync(user).ConfigureAwait(false);
-            rows.Add(new UserRow(user.Id, user.UserName ?? "", string.Join(", ", roles), user.LockoutEnd > now, user.AccessFailedCount));
+            rows.Add(new UserRow(user.Id, user.UserName ?? "", string.Join(", ", roles), user.LockoutEnd > now, user.AccessFailedCount, SessionChecks.IsDisabled(user)));
         }
 
         Accounts = rows;

@@ -84,9 +84,19 @@ public sealed class QuickCalculatorModel(QuickPlanHandler handler, TradeOffFigur
     public string? ErrorFor(string field) =>
         ModelState.TryGetValue($"{nameof(Input)}.{field}", out var entry) && entry.Errors.Count > 0 ? entry.Errors[0].ErrorMessage : null;
 
-    public static string Dioptres(double value) => value.ToString("0.00", Culture) + " D";
+    // The optics core's one dioptre label (it drops arithmetic noise below the shown digits before rounding).
+    public static string Dioptres(double value) => Power.FromDioptres(Math.Abs(value) < 0.005 ? 0 : value).ToString("0.00", Culture);
 
-    public static string Centimetres(double value) => value.ToString(value < 10 ? "0.0" : "0", Culture) + " cm";
+    public static string Centimetres(double value) => value < 1
+        ? (value * 10).ToString("0.0", Culture) + " mm"
+        : value.ToString(value < 10 ? "0.0" : "0", Culture) + " cm";
+
+    public static string Letters(int? letters) => letters switch
+    {
+        null => "not limited by a lens",
+        < 1 => "less than one",
+        _ => letters.Value.ToString(Culture),
+    };
 
     public static string Times(double value) => value.ToString("0.0", Culture) + "×";
 
@@ -108,9 +118,13 @@ public sealed class QuickCalculatorModel(QuickPlanHandler handler, TradeOffFigur
             text += "; convergence " + Number(option.ConvergenceDemandPrismDioptres, "0.#") + " Δ";
         }
 
-        if (option.BaseInPrismDioptres is { } prism)
+        if (option.BaseInPrismEachEyeDioptres is { } prism)
         {
-            text += "; base-in prism by the add + 2 rule: " + Number(prism, "0.#") + " Δ";
+            text += "; " + Number(prism, "0.#") + " Δ base-in in each lens (add + 2 each eye)";
+            if (option.ConvergenceLeftAfterPrismDioptres is { } left)
+            {
+                text += "; convergence left after the prism " + Number(left, "0.#") + " Δ";
+            }
         }
 
         return text;

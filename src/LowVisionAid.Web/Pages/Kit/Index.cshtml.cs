@@ -42,11 +42,13 @@ public sealed class IndexModel(KitHandler handler) : PageModel
         }
         else
         {
-            using var reader = new StreamReader(file.OpenReadStream(), Encoding.UTF8);
-            var (added, updated, errors) = await handler.ImportAsync(reader, ct).ConfigureAwait(false);
+            using var bytes = new MemoryStream();
+            await file.CopyToAsync(bytes, ct).ConfigureAwait(false);
+            var (added, updated, encoding, errors) = await handler.ImportAsync(bytes.ToArray(), ct).ConfigureAwait(false);
             if (errors.Count == 0)
             {
-                Message = string.Create(CultureInfo.InvariantCulture, $"Imported: {added} added, {updated} updated.");
+                Message = string.Create(CultureInfo.InvariantCulture, $"Imported: {added} added, {updated} updated.")
+                    + (encoding == KitCsvText.Utf8 ? "" : $" The file was read as {encoding} text.");
                 return RedirectToPage();
             }
 

@@ -48,13 +48,16 @@ public sealed class KitHandler(ClinicDbContext db)
         return writer.ToString();
     }
 
-    /// <summary>Imports a CSV file whole or not at all: new codes are added, known codes are updated.</summary>
-    public async Task<(int Added, int Updated, IReadOnlyList<KitCsvError> Errors)> ImportAsync(TextReader csv, CancellationToken ct)
+    /// <summary>
+    /// Imports a CSV file whole or not at all: new codes are added, known codes are updated. The file's bytes are
+    /// read in the encoding they are in (<see cref="KitCsvText"/>), which is returned.
+    /// </summary>
+    public async Task<(int Added, int Updated, string Encoding, IReadOnlyList<KitCsvError> Errors)> ImportAsync(byte[] file, CancellationToken ct)
     {
-        var import = KitCsv.Import(csv);
+        var import = KitCsv.Import(file);
         if (!import.Success)
         {
-            return (0, 0, import.Errors);
+            return (0, 0, import.Encoding, import.Errors);
         }
 
         var existing = await db.KitDevices.ToDictionaryAsync(k => k.Code, StringComparer.OrdinalIgnoreCase, ct).ConfigureAwait(false);
@@ -77,7 +80,7 @@ public sealed class KitHandler(ClinicDbContext db)
         }
 
         await db.SaveChangesAsync(ct).ConfigureAwait(false);
-        return (added, updated, []);
+        return (added, updated, import.Encoding, []);
     }
 
     private static void Copy(CoreKitDevice core, KitDevice device)

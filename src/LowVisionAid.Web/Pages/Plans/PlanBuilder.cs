@@ -16,9 +16,9 @@ public static class PlanBuilder
     {
         ArgumentNullException.ThrowIfNull(inputs);
         var assumptions = new List<string>();
-        if (inputs.Goals.Any(g => PlanInputs.TaskFor(g.Task) == ReadingTask.DistanceViewing))
+        foreach (var task in inputs.Goals.Where(g => g.ViewingDistanceMetres is null && TaskRules.For(g.Task).Kind == ReadingTask.DistanceViewing).Select(g => g.Task).Distinct())
         {
-            assumptions.Add($"Television and faces are planned at {Length(Distance.FromMetres(PlanInputs.AssumedDistanceViewingMetres), inputs.Imperial)}, an assumed viewing distance; measure the client's own.");
+            assumptions.Add($"{Labels.Task(task)} is planned at {Length(TaskRules.For(task).Example, inputs.Imperial)}, an assumed viewing distance; measure the client's own.");
         }
 
         if (inputs.ReadingSpeeds.Count > 0)
@@ -37,7 +37,7 @@ public static class PlanBuilder
         var problems = Planner.Check(request);
         if (!problems.IsEmpty)
         {
-            return new GoalPlan(title, goal.TargetText, taskLabel, problems, null, null, [], false, [], null, [], [], [], []);
+            return new GoalPlan(title, goal.TargetText, taskLabel, problems, null, null, [], false, [], null, [], [], [], []) { ReferenceEstimates = [], PossibleReasons = [] };
         }
 
         var result = Planner.Build(request);
@@ -56,7 +56,13 @@ public static class PlanBuilder
             [.. result.Options.Select(o => Option(o, kitNames, inputs.Imperial))],
             [.. result.KitDevices.Select(o => Option(o, kitNames, inputs.Imperial))],
             [.. result.NotConsidered.Select(n => $"{KindLabel(n.Kind)}: {n.Reason}")],
-            [.. result.Cautions.Select(x => new CautionRow(x.Id, x.Text))]);
+            [.. result.Cautions.Select(x => new CautionRow(x.Id, x.Text))])
+        {
+            Reserve = result.Reserve?.Reserve.ToString(null, Invariant),
+            ReserveWhy = result.Reserve?.FormatWhy(Invariant),
+            ReferenceEstimates = result.Estimates is { } r ? [.. r.ForReference.Select(x => Estimate(x, inputs.Imperial))] : [],
+            PossibleReasons = result.Estimates?.FormatPossibleReasons(Invariant) ?? [],
+        };
     }
 
     private static EstimateRow Estimate(PowerEstimate e, bool imperial) => new(
@@ -72,7 +78,7 @@ public static class PlanBuilder
         MethodLabel(d.Lower.Method),
         MethodLabel(d.Higher.Method),
         $"{d.DifferenceLogUnits.ToString("0.00", Invariant)} log units ({d.PowerRatio.ToString("0.0#", Invariant)} times the power)",
-        d.PossibleReasons);
+        []);
 
     private static OptionRow Option(RankedOption ranked, Dictionary<string, string> kitNames, bool imperial)
     {
@@ -103,15 +109,25 @@ public static class PlanBuilder
             new("Power needed", Dioptres(o.RequiredPower)),
             new("Power given", Dioptres(o.DeliveredPower) + (o.MeetsRequiredPower ? " (enough)" : " (not enough)")),
         };
+        if (o is DistanceTelescopeOption telescope)
+        {
+            figures.Add(new("Magnification", $"{telescope.Magnification.ToString("0.#", Invariant)}× ({telescope.MagnificationNeeded.ToString("0.#", Invariant)}× needed)"));
+        }
+
+        if (o is ScreenMagnificationOption screen)
+        {
+            figures.Add(new("Zoom or text size", $"{screen.ZoomPercent.ToString("0", Invariant)} % (text about {screen.FontSizePixels.ToString("0", Invariant)} px)"));
+        }
+
         Add(figures, "Lens or add", o.LensPower is { } lens ? Dioptres(lens) : null);
         Add(figures, "Label reads", o.Labels is { } l ? $"{l.Nominal.ToString("0.#", Invariant)}× nominal, {l.Trade.ToString("0.#", Invariant)}× trade (re 25 cm)" : null);
         figures.Add(new("Working distance", Length(o.WorkingDistance, imperial)));
         Add(figures, "Eye to lens", o.EyeToLens is { } eye ? Length(eye, imperial) : null);
         Add(figures, "Field on the page", o.LinearField is { } field ? Length(field, imperial) : null);
-        Add(figures, "Letters in view", o.CharactersInView?.ToString("0", Invariant));
+        Add(figures, "Letters in view", o.LettersInView is { } letters ? (letters >= 1 ? letters.ToString(Invariant) : "Less than one") : null);
         figures.Add(new("Depth of focus", o.DepthOfField is { } dof ? Length(dof, imperial) : "Reaches to infinity"));
         figures.Add(new("Both eyes", o.Binocular.Feasible
-            ? $"Possible (convergence demand {o.Binocular.ConvergenceDemand.ToString("0.#", Invariant)} Δ{(o.Binocular.BaseInPrismRule is { } bi ? $"; base-in prism by rule {bi.ToString("0.#", Invariant)} Δ" : "")})"
+            ? $"Possible (convergence demand {o.Binocular.ConvergenceDemand.ToString("0.#", Invariant)} Δ{(o.Binocular.BaseInPrismEachEye is { } bi ? $"; {bi.ToString("0.#", Invariant)} Δ base-in in each lens (add + 2 each eye), convergence left after the prism {o.Binocular.ResidualConvergence.ToString("0.#", Invariant)} Δ" : "")})"
             : "One eye only"));
         figures.Add(new("Accommodation or add needed", Dioptres(o.AccommodationOrAddNeeded)));
         figures.Add(new("Hands free", o.HandsFree ? "Yes" : "No"));
@@ -146,7 +162,7 @@ public static class PlanBuilder
     private static string Dioptres(Power p) => p.ToString(null, Invariant);
 
     private static string Length(Distance d, bool imperial) =>
-        imperial ? DistanceNotation.Format(d, Invariant, "in") : DistanceNotation.Format(d, Invariant);
+        imperial ? DistanceNotation.Format(d, Invariant, "in") : DistanceNotation.Format(d, Invariant, d.Abs().Centimetres < 1 ? "mm" : null);
 
     public static string MethodLabel(PowerMethod method) => method switch
     {
@@ -167,6 +183,8 @@ public static class PlanBuilder
         OptionKind.NearTelescope => "Near telescope",
         OptionKind.VideoMagnifier => "Video magnifier",
         OptionKind.DistanceTelescope => "Distance telescope",
+        OptionKind.SpectacleTelescope => "Spectacle-mounted distance telescope",
+        OptionKind.ScreenMagnification => "Screen zoom or text size",
         _ => kind.ToString(),
     };
 

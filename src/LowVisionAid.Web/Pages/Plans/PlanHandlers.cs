@@ -43,7 +43,7 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             return new(null, NoGoals);
         }
 
-        if (inputs.WorkingDistanceMetres <= 0 && inputs.Goals.Any(g => PlanInputs.TaskFor(g.Task) != ReadingTask.DistanceViewing))
+        if (inputs.WorkingDistanceMetres <= 0 && inputs.Goals.Any(g => TaskRules.For(g.Task).Kind != ReadingTask.DistanceViewing))
         {
             return new(null, NoWorkingDistance);
         }
@@ -72,7 +72,7 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             return null;
         }
 
-        var settings = await db.Settings.AsNoTracking().FirstOrDefaultAsync(ct).ConfigureAwait(false)
+        var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false)
             ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
         var kit = await db.KitDevices.AsNoTracking().OrderBy(k => k.Code).ToListAsync(ct).ConfigureAwait(false);
         return new PlanInputs
@@ -84,6 +84,7 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             NearTestDistanceMetres = visit.NearTestDistance?.Metres,
             ReadingSpeeds = [.. visit.ReadingSpeeds.OrderBy(s => s.Position).Select(s => new SpeedPoint(s.PrintSize.M, s.WordsPerMinute))],
             LogContrastSensitivity = visit.ContrastLogCs,
+            DimLighting = visit.HomeLighting is HomeLighting.Dim or HomeLighting.Poor,
             AddWornDioptres = visit.AddWorn?.Dioptres,
             MeasuredAmplitudeDioptres = visit.AccommodationMeasured?.Dioptres,
             WorkingDistanceMetres = visit.WorkingDistance?.Metres ?? 0,

@@ -17,9 +17,6 @@ namespace LowVisionAid.Web.Pages.Plans;
 /// </summary>
 public sealed record PlanInputs
 {
-    /// <summary>Distance tasks (television, faces) are planned at this viewing distance: an assumption shown on the plan.</summary>
-    public const double AssumedDistanceViewingMetres = 3.0;
-
     public int VisitId { get; init; }
 
     public int? AgeYears { get; init; }
@@ -33,6 +30,9 @@ public sealed record PlanInputs
     public IReadOnlyList<SpeedPoint> ReadingSpeeds { get; init; } = [];
 
     public double? LogContrastSensitivity { get; init; }
+
+    /// <summary>Home lighting recorded as dim or poor at the visit: illuminated devices rank higher.</summary>
+    public bool DimLighting { get; init; }
 
     public double? AddWornDioptres { get; init; }
 
@@ -64,19 +64,19 @@ public sealed record PlanInputs
     public PlanRequest RequestFor(GoalPoint goal)
     {
         ArgumentNullException.ThrowIfNull(goal);
-        var task = TaskFor(goal.Task);
-        var distanceTask = task == ReadingTask.DistanceViewing;
+        var rule = TaskRules.For(goal.Task);
+        var distanceTask = rule.Kind == ReadingTask.DistanceViewing;
         Distance? nearDistance = NearTestDistanceMetres is { } nd ? Distance.FromMetres(nd) : null;
         return new PlanRequest
         {
-            Task = task,
+            Task = rule.Kind,
+            Goal = goal.Task,
             TargetPrint = PrintSize.FromM(goal.TargetM ?? 1.0),
-            PreferredDistance = Distance.FromMetres(distanceTask ? AssumedDistanceViewingMetres : WorkingDistanceMetres),
+            PreferredDistance = distanceTask ? AssumedViewingDistance(goal) : Distance.FromMetres(WorkingDistanceMetres),
             DistanceAcuity = DistanceLogMar is { } d ? Acuity.FromLogMar(d) : null,
             GoalDistanceAcuity = goal.GoalLogMar is { } g ? Acuity.FromLogMar(g) : null,
             Estimates = new EstimateInputs
             {
-                Reserve = AcuityReserve.FromRatio(ReserveFor(goal.Task)),
                 NearThresholdPrint = NearThresholdM is { } m ? PrintSize.FromM(m) : null,
                 NearTestDistance = nearDistance,
                 ReadingPoints = [.. ReadingSpeeds.Select(s => new ReadingPoint(PrintSize.FromM(s.PrintM), s.WordsPerMinute))],
@@ -93,34 +93,40 @@ public sealed record PlanInputs
                     : null,
                 AddWorn = AddWornDioptres is { } add ? Power.FromDioptres(add) : null,
                 LogContrastSensitivity = LogContrastSensitivity,
+                DimLighting = DimLighting,
             },
             Kit = [.. Kit.Select(k => k.ToCore())],
-            Settings = PlanSettings.Default with { CharacterPitch = CharacterPitch },
+            Settings = PlanSettings.Default with
+            {
+                CharacterPitch = CharacterPitch,
+                Reserves = new ReserveRatios
+                {
+                    Spot = Ratio(SpotReserve, AcuityReserve.Spot),
+                    Fluent = Ratio(FluentReserve, AcuityReserve.Fluent),
+                    Sustained = Ratio(SustainedReserve, AcuityReserve.Sustained),
+                },
+            },
         };
     }
 
-    /// <summary>How each everyday task is planned.</summary>
-    public static ReadingTask TaskFor(GoalTask task) => task switch
+    /// <summary>
+    /// The viewing distance a distance goal is planned at: the goal's own when recorded, else the typical distance of
+    /// its task (<see cref="TaskRules"/>), an assumption shown on the plan.
+    /// </summary>
+    public static Distance AssumedViewingDistance(GoalPoint goal)
     {
-        GoalTask.MedicationLabels => ReadingTask.SpotReading,
-        GoalTask.Phone => ReadingTask.Screen,
-        GoalTask.Writing => ReadingTask.Writing,
-        GoalTask.Television or GoalTask.Faces => ReadingTask.DistanceViewing,
-        _ => ReadingTask.SustainedReading,
-    };
+        ArgumentNullException.ThrowIfNull(goal);
+        return goal.ViewingDistanceMetres is { } m ? Distance.FromMetres(m) : TaskRules.For(goal.Task).Example;
+    }
 
-    /// <summary>The clinic's default reserve for the task: spot for labels and phones, sustained for books, fluent otherwise.</summary>
-    public double ReserveFor(GoalTask task) => task switch
-    {
-        GoalTask.MedicationLabels or GoalTask.Phone => SpotReserve,
-        GoalTask.Book => SustainedReserve,
-        _ => FluentReserve,
-    };
+    // A clinic setting outside 1:1 to 10:1 cannot come from the settings form; the documented default stands in for it.
+    private static AcuityReserve Ratio(double ratio, AcuityReserve fallback) =>
+        ratio is >= 1 and <= AcuityReserve.MaximumRatio ? AcuityReserve.FromRatio(ratio) : fallback;
 }
 
 public sealed record SpeedPoint(double PrintM, int WordsPerMinute);
 
-public sealed record GoalPoint(GoalTask Task, string? Detail, string TargetText, double? TargetM, double? GoalLogMar);
+public sealed record GoalPoint(GoalTask Task, string? Detail, string TargetText, double? TargetM, double? GoalLogMar, double? ViewingDistanceMetres = null);
 
 /// <summary>One kit device as it was when the plan was made.</summary>
 public sealed record KitPoint

@@ -21,7 +21,20 @@ public sealed record GoalPlan(
     IReadOnlyList<OptionRow> Options,
     IReadOnlyList<OptionRow> KitDevices,
     IReadOnlyList<string> NotConsidered,
-    IReadOnlyList<CautionRow> Cautions);
+    IReadOnlyList<CautionRow> Cautions)
+{
+    /// <summary>The acuity reserve the estimates used ("2:1"); null for distance goals and plans made before it was stored.</summary>
+    public string? Reserve { get; init; }
+
+    /// <summary>Why that reserve was used, with its source; null when <see cref="Reserve"/> is.</summary>
+    public string? ReserveWhy { get; init; }
+
+    /// <summary>Estimates shown for reference, outside the comparison (another target or reserve); null in older plans.</summary>
+    public IReadOnlyList<EstimateRow>? ReferenceEstimates { get; init; }
+
+    /// <summary>The possible reasons for a disagreement, each once; null in older plans, which keep them per pair.</summary>
+    public IReadOnlyList<string>? PossibleReasons { get; init; }
+}
 
 public sealed record EstimateRow(string Method, string EquivalentPower, string ViewingDistance, string Magnification, string Reserve, string LogUnits, IReadOnlyList<string> Assumptions);
 

@@ -13,7 +13,7 @@ public sealed class SettingsHandler(ClinicDbContext db, DemoClinic demo)
     /// <summary>The settings row, made with the defaults if the database has none (demo loading turned off).</summary>
     public async Task<ClinicSettings> CurrentAsync(CancellationToken ct)
     {
-        var settings = await db.Settings.AsNoTracking().FirstOrDefaultAsync(ct).ConfigureAwait(false);
+        var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false);
         if (settings is not null)
         {
             return settings;

@@ -1,6 +1,7 @@
 using System.Globalization;
 using FluentValidation;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Infrastructure;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;

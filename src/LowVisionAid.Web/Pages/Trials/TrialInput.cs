@@ -2,6 +2,7 @@ using System.Globalization;
 using FluentValidation;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Infrastructure;
 
 namespace LowVisionAid.Web.Pages.Trials;

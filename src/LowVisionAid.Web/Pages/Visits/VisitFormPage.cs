@@ -1,5 +1,6 @@
 using FluentValidation;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Infrastructure;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;

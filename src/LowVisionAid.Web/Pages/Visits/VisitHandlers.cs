@@ -12,7 +12,7 @@ public sealed class VisitFormHandler(ClinicDbContext db)
         db.Clients.AsNoTracking().Where(c => c.Id == clientId).Select(c => new VisitClient(c.Id, c.Code, c.Name)).FirstOrDefaultAsync(ct);
 
     public async Task<SnellenUnit> SnellenUnitAsync(CancellationToken ct) =>
-        await db.Settings.AsNoTracking().Select(s => (SnellenUnit?)s.SnellenIn).FirstOrDefaultAsync(ct).ConfigureAwait(false) ?? SnellenUnit.Metres;
+        await db.Settings.AsNoTracking().OrderBy(s => s.Id).Select(s => (SnellenUnit?)s.SnellenIn).FirstOrDefaultAsync(ct).ConfigureAwait(false) ?? SnellenUnit.Metres;
 
     /// <summary>A visit with its goals and reading speeds, for editing; null when there is none.</summary>
     public Task<Visit?> LoadAsync(int id, CancellationToken ct) =>

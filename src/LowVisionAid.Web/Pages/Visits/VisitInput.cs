@@ -2,6 +2,7 @@ using System.Globalization;
 using FluentValidation;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Infrastructure;
 
 namespace LowVisionAid.Web.Pages.Visits;
@@ -112,9 +113,11 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
             .WithMessage("The visit date is in the future; type the date the client was seen, such as today's.");
         RuleFor(v => v.Practitioner).MaximumLength(FieldLimits.Name).WithMessage($"Keep the practitioner's name to {FieldLimits.Name} characters or fewer.");
 
-        RuleFor(v => v.DistanceRight).Reads(Readings.Acuity);
-        RuleFor(v => v.DistanceLeft).Reads(Readings.Acuity);
-        RuleFor(v => v.DistanceBoth).Reads(Readings.Acuity);
+        // Counting fingers, hand movements, light perception and no light perception are recorded in any eye; they
+        // are refused only for calculation (the plan uses the chart acuities and near measurements there are).
+        RuleFor(v => v.DistanceRight).Reads(Readings.RecordedVision);
+        RuleFor(v => v.DistanceLeft).Reads(Readings.RecordedVision);
+        RuleFor(v => v.DistanceBoth).Reads(Readings.RecordedVision);
         RuleFor(v => v.NearThreshold).Reads(Readings.PrintSize);
         RuleFor(v => v.NearTestDistance).Reads(Readings.Distance);
         RuleFor(v => v.NearTestDistance)
@@ -144,6 +147,24 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
             .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var add) || add.Dioptres >= 0)
             .WithMessage("A reading add is a plus power; type it such as +2.50, or leave it empty.");
         RuleFor(v => v.WorkingDistance).Reads(Readings.Distance);
+        RuleFor(v => v.WorkingDistance)
+            .Custom((typed, context) =>
+            {
+                if (string.IsNullOrWhiteSpace(typed) || !Readings.Distance(typed).TryGetValue(out var distance))
+                {
+                    return;
+                }
+
+                // The working distance is for the near goals: each one's sane range comes from the optics core's task rule.
+                var rules = context.InstanceToValidate.Goals
+                    .Where(g => g.IsUsed && !g.IsDistanceTask && Enum.TryParse<GoalTask>(g.Task, out _))
+                    .Select(g => TaskRules.For(Enum.Parse<GoalTask>(g.Task!)))
+                    .DefaultIfEmpty(TaskRules.For(ReadingTask.SustainedReading));
+                if (rules.Select(r => r.CheckDistance(distance)).FirstOrDefault(m => m is not null) is { } problem)
+                {
+                    context.AddFailure(problem);
+                }
+            });
         RuleFor(v => v.Notes).MaximumLength(FieldLimits.Notes).WithMessage($"Keep the notes to {FieldLimits.Notes} characters or fewer.");
         RuleFor(v => v.UsefulEyes).IsInEnum().WithMessage("Choose which eyes are useful from the list.");
         RuleFor(v => v.HomeLighting).IsInEnum().WithMessage("Choose the lighting at home from the list.");

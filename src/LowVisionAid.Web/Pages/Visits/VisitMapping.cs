@@ -1,5 +1,6 @@
 using System.Globalization;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Web.Infrastructure;
 
 namespace LowVisionAid.Web.Pages.Visits;
@@ -12,9 +13,10 @@ internal static class VisitMapping
         VisitInput.TryDate(input.VisitDate, out var date);
         visit.VisitDate = date;
         visit.Practitioner = Clean(input.Practitioner);
-        (visit.DistanceRightText, visit.DistanceRight) = Read(input.DistanceRight, Readings.Acuity);
-        (visit.DistanceLeftText, visit.DistanceLeft) = Read(input.DistanceLeft, Readings.Acuity);
-        (visit.DistanceBothText, visit.DistanceBoth) = Read(input.DistanceBoth, Readings.Acuity);
+        // Counting fingers and the like are kept as typed with no acuity value: recorded, never calculated with.
+        (visit.DistanceRightText, visit.DistanceRight) = ReadVision(input.DistanceRight);
+        (visit.DistanceLeftText, visit.DistanceLeft) = ReadVision(input.DistanceLeft);
+        (visit.DistanceBothText, visit.DistanceBoth) = ReadVision(input.DistanceBoth);
         (visit.NearThresholdText, visit.NearThreshold) = Read(input.NearThreshold, Readings.PrintSize);
         (visit.NearTestDistanceText, visit.NearTestDistance) = Read(input.NearTestDistance, Readings.Distance);
         visit.ContrastSensitivityText = Clean(input.ContrastSensitivity);
@@ -86,6 +88,9 @@ internal static class VisitMapping
 
     private static (string? Text, T? Value) Read<T>(string? typed, Func<string, Optics.Text.ParseResult<T>> parse) where T : struct =>
         Clean(typed) is { } text ? (text, parse(text).Value) : (null, null);
+
+    private static (string? Text, Optics.Quantities.Acuity? Value) ReadVision(string? typed) =>
+        Clean(typed) is { } text ? (text, Readings.RecordedVision(text).Value) : (null, null);
 
     private static string? Clean(string? text) => string.IsNullOrWhiteSpace(text) ? null : text.Trim();
 }

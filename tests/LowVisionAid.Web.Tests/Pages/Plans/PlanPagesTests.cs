@@ -10,7 +10,7 @@ namespace LowVisionAid.Web.Tests.Pages.Plans;
 public partial class PlanPagesTests
 {
     [Fact]
-    public async Task A_plan_shows_the_required_power_by_each_method_side_by_side_with_the_disagreement_flag()
+    public async Task A_plan_shows_the_required_power_by_each_method_side_by_side_compared_like_with_like()
     {
         using var app = new ClinicApp();
         using var browser = app.Browser();
@@ -23,10 +23,15 @@ public partial class PlanPagesTests
         // The visit: distance acuity 0.1 decimal (6/60), 4M read at 40 cm, goal newspaper 1M, fluent reserve 2:1.
         // Kestenbaum 6/60 → +10 D (CV-06, Kestenbaum and Sturman 1956, exact); with 2:1 → +20 D (CV-07, derived, exact);
         // near method 4M at 40 cm for 1M at 2:1 → +20 D, EVD 5 cm (CV-08, Bailey/Lovie-Kitchin, derived, exact).
-        Assert.Matches(@"Kestenbaum&#x27;s rule \(1M at threshold\)</th><td data-label=""Equivalent power"">&#x2B;10.00 D</td>", html);
+        // Methods §2.6 (corrected 2026-12-03): the +10 D threshold figure is shown for reference outside the comparison,
+        // and +20 D against +20 D agree. (Before, this plan was flagged as disagreeing: the issue declares that wrong.)
+        Assert.Contains("For reference, not compared: Kestenbaum&#x27;s rule (1M at threshold) gives &#x2B;10.00 D", html, StringComparison.Ordinal);
         Assert.Matches(@"Kestenbaum&#x27;s rule with reserve</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td>", html);
         Assert.Matches(@"Near acuity \(equivalent viewing distance\)</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td><td data-label=""Equivalent viewing distance"">5 cm</td>", html);
-        Assert.Contains("The methods disagree by more than 0.2 log units.", html, StringComparison.Ordinal);
+        Assert.Contains("The methods agree within 0.2 log units.", html, StringComparison.Ordinal);
+        Assert.DoesNotContain("The methods disagree", html, StringComparison.Ordinal);
+        // Which reserve was used, and why (fluent 2:1: Cheong, Lovie-Kitchin and Bowers 2002).
+        Assert.Contains("Reserve used: 2:1.", html, StringComparison.Ordinal);
         Assert.Contains(HtmlEncoder.Default.Encode(Caution.StartingPoint.Text), html, StringComparison.Ordinal);
         Assert.Contains(HtmlEncoder.Default.Encode(Caution.NeverAtTheSun.Text), html, StringComparison.Ordinal);
     }

@@ -111,7 +111,7 @@ public sealed partial class PlanReportPagesTests
 
         Assert.Equal(HttpStatusCode.OK, response.StatusCode);
         var pdf = Read(await response.Content.ReadAsByteArrayAsync());
-        Assert.Contains("2026.12.1", pdf.Text, StringComparison.Ordinal);
+        Assert.Contains(LowVisionAid.Optics.Planning.Planner.MethodVersion, pdf.Text, StringComparison.Ordinal);
         Assert.Contains("Preferred working distance", pdf.Text, StringComparison.Ordinal);
         // Table cells wrap within their column, so words of one cell may be read between other cells' words.
         AssertWords("Kestenbaum's rule with reserve", pdf.Text);
@@ -215,7 +215,7 @@ public sealed partial class PlanReportPagesTests
         Assert.Equal(3, Regex.Count(html, "<table class=\"trade-off-table stack-narrow\">"));
         // The window holds exactly the letters the stored plan counted (22).
         Assert.Equal(22, Regex.Count(html, "class=\"" + Reports.Figures.TradeOffFigures.LetterClass + "\""));
-        Assert.Contains("2026.12.1", html, StringComparison.Ordinal);
+        Assert.Contains(LowVisionAid.Optics.Planning.Planner.MethodVersion, html, StringComparison.Ordinal);
         Assert.DoesNotContain("style=", html, StringComparison.Ordinal);
     }
 
@@ -230,8 +230,14 @@ public sealed partial class PlanReportPagesTests
         Assert.Equal(new ClinicContact("Harbour Test Clinic (invented)", "000 1111 2222 (invented)", "desk@clinic.invalid", "2 Quay Street, Port Example"), contact);
     }
 
-    [Fact]
-    public async Task The_first_page_of_each_pdf_is_rendered_to_png_as_a_test_artefact()
+    // A4 is 210 × 297 mm (ISO 216); at 60 dots per inch that is 496.1 × 701.6 px (derived: mm / 25.4 × 60), and
+    // poppler rounds each side to a whole pixel. An office printer cannot print the outer 5 mm or so of a sheet (common
+    // practice); the handout's margin is 54 pt (19 mm) and the summary's 50 pt (17.6 mm), so nothing may be drawn in
+    // the outer 5 mm (12 px at 60 dpi), while the page must carry ink (dark pixels) inside.
+    [Theory]
+    [InlineData("Handout")]
+    [InlineData("Summary")]
+    public async Task A_second_pdf_reader_draws_every_page_on_a4_with_ink_inside_the_printable_area(string kind)
     {
         var pdftoppm = (Environment.GetEnvironmentVariable("PATH") ?? "").Split(Path.PathSeparator)
             .Select(d => Path.Combine(d, "pdftoppm")).FirstOrDefault(File.Exists);
@@ -240,18 +246,79 @@ public sealed partial class PlanReportPagesTests
         using var browser = app.Browser();
         var planId = await ChosenPlanAsync(app, browser, "A-1");
         var folder = ArtefactFolder();
+        var pdfPath = Path.Combine(folder, $"plan-{kind.ToLowerInvariant()}.pdf");
+        await File.WriteAllBytesAsync(pdfPath, await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/{kind}", UriKind.Relative)));
 
-        foreach (var kind in new[] { "Handout", "Summary" })
+        // Act: poppler (an independent reader) draws every page in grey at 60 dpi; it reports any syntax error.
+        var prefix = Path.Combine(folder, $"plan-{kind.ToLowerInvariant()}");
+        foreach (var stale in Directory.GetFiles(folder, Path.GetFileName(prefix) + "-*.pgm"))
         {
-            var pdfPath = Path.Combine(folder, $"plan-{kind.ToLowerInvariant()}.pdf");
-            await File.WriteAllBytesAsync(pdfPath, await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/{kind}", UriKind.Relative)));
-            var prefix = Path.Combine(folder, $"plan-{kind.ToLowerInvariant()}-1");
-            using var process = Process.Start(new ProcessStartInfo(pdftoppm!) { ArgumentList = { "-png", "-r", "60", "-f", "1", "-l", "1", "-singlefile", pdfPath, prefix } })!;
-            await process.WaitForExitAsync();
-
-            Assert.Equal(0, process.ExitCode);
-            Assert.True(new FileInfo(prefix + ".png").Length > 1000, prefix + ".png");
+            File.Delete(stale);
         }
+
+        var start = new ProcessStartInfo(pdftoppm!) { RedirectStandardError = true, ArgumentList = { "-gray", "-r", "60", pdfPath, prefix } };
+        using var process = Process.Start(start)!;
+        var complaints = await process.StandardError.ReadToEndAsync();
+        await process.WaitForExitAsync();
+
+        // Assert
+        Assert.Equal(0, process.ExitCode);
+        Assert.True(complaints.Length == 0, "poppler complained: " + complaints);
+        var pages = Directory.GetFiles(folder, Path.GetFileName(prefix) + "-*.pgm");
+        using var document = PigDocument.Open(pdfPath);
+        Assert.Equal(document.NumberOfPages, pages.Length);
+        foreach (var page in pages)
+        {
+            var (width, height, pixels) = ReadGreyMap(await File.ReadAllBytesAsync(page));
+            Assert.InRange(width, 496, 497);
+            Assert.InRange(height, 701, 702);
+            const int Edge = 12;
+            var inkAtEdge = 0;
+            var inkInside = 0;
+            for (var y = 0; y < height; y++)
+            {
+                for (var x = 0; x < width; x++)
+                {
+                    if (pixels[(y * width) + x] < 128)
+                    {
+                        var atEdge = x < Edge || y < Edge || x >= width - Edge || y >= height - Edge;
+                        inkAtEdge += atEdge ? 1 : 0;
+                        inkInside += atEdge ? 0 : 1;
+                    }
+                }
+            }
+
+            Assert.True(inkAtEdge == 0, $"{Path.GetFileName(page)} has {inkAtEdge} dark pixels in the outer 5 mm a printer cannot print.");
+            Assert.True(inkInside > 500, $"{Path.GetFileName(page)} is nearly blank ({inkInside} dark pixels).");
+        }
+    }
+
+    /// <summary>A binary PGM (P5, 8-bit grey): its size and its pixels, row by row.</summary>
+    private static (int Width, int Height, byte[] Pixels) ReadGreyMap(byte[] file)
+    {
+        var position = 0;
+        string Next()
+        {
+            while (char.IsWhiteSpace((char)file[position]))
+            {
+                position++;
+            }
+
+            var from = position;
+            while (!char.IsWhiteSpace((char)file[position]))
+            {
+                position++;
+            }
+
+            return System.Text.Encoding.ASCII.GetString(file, from, position - from);
+        }
+
+        Assert.Equal("P5", Next());
+        var width = int.Parse(Next(), CultureInfo.InvariantCulture);
+        var height = int.Parse(Next(), CultureInfo.InvariantCulture);
+        Assert.Equal("255", Next());
+        position++;
+        return (width, height, file[position..(position + (width * height))]);
     }
 
     /// <summary>

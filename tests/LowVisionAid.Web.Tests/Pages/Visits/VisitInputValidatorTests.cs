@@ -23,7 +23,10 @@ public class VisitInputValidatorTests
         { "VisitDate", "30/05/2026", "VisitDate" },
         { "VisitDate", "2026-06-10", "VisitDate" },
         { "DistanceBoth", "6/0", "DistanceBoth" },
-        { "DistanceBoth", "CF", "DistanceBoth" },
+        { "DistanceBoth", "CF at", "DistanceBoth" },
+        // Sane working distances for reading (common practice; issue 10): 2 mm and 25 m are refused, with what to type.
+        { "WorkingDistance", "2 mm", "WorkingDistance" },
+        { "WorkingDistance", "25 m", "WorkingDistance" },
         { "NearThreshold", "", "NearThreshold" },
         { "NearTestDistance", "", "NearTestDistance" },
         { "NearTestDistance", "40", "NearTestDistance" },

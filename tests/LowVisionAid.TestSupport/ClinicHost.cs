@@ -1,0 +1,125 @@
+using LowVisionAid.Data;
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Mvc.Testing;
+using Microsoft.AspNetCore.TestHost;
+using Microsoft.Data.Sqlite;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Logging;
+using Microsoft.Extensions.Logging.Testing;
+
+namespace LowVisionAid.TestSupport;
+
+/// <summary>
+/// The one host fixture of the app tests: the real app in process over its own data folder, whose database starts as
+/// a copy of <see cref="TemplateDatabase"/> (already migrated), so no host applies the migrations again. The demo
+/// clinic is off unless asked for; the environment is Production unless set (no developer error pages); a test that
+/// depends on today's date passes its own clock; logs go to the framework's fake collector when asked for.
+/// </summary>
+public class ClinicHost : WebApplicationFactory<Program>
+{
+    private readonly bool _ownsDataFolder;
+
+    /// <param name="dataFolder">A folder the test owns (kept on dispose), or null for a fresh temp folder deleted on dispose.</param>
+    public ClinicHost(string? dataFolder = null)
+    {
+        _ownsDataFolder = dataFolder is null;
+        DataFolder = dataFolder ?? Path.Combine(Path.GetTempPath(), "lowvisionaid-tests", Guid.NewGuid().ToString("N"));
+    }
+
+    /// <summary>The folder that holds this host's database (the app's <c>DataFolder</c> setting).</summary>
+    public string DataFolder { get; }
+
+    /// <summary>Whether the app loads the invented demo clinic into its (empty) database at start. Default: no.</summary>
+    public bool LoadDemo { get; init; }
+
+    /// <summary>The host environment. Default: Production, what a clinic runs.</summary>
+    public string EnvironmentName { get; init; } = "Production";
+
+    /// <summary>The clock the app reads (e.g. a <c>FakeTimeProvider</c>); null keeps the system clock.</summary>
+    public TimeProvider? Clock { get; init; }
+
+    /// <summary>Start from a copy of the migrated template when the folder has no database. Default: yes.</summary>
+    public bool UseTemplateDatabase { get; init; } = true;
+
+    /// <summary>Extra configuration settings (key, value), applied after the ones above.</summary>
+    public IReadOnlyDictionary<string, string?> Settings { get; init; } = new Dictionary<string, string?>();
+
+    /// <summary>When set, every log line (Debug and up) goes here and nowhere else (the console stays quiet).</summary>
+    public FakeLogCollector? LogCollector { get; init; }
+
+    /// <summary>A client that keeps cookies (for antiforgery) and does not follow redirects, as the tests want a browser.</summary>
+    public HttpClient NewBrowserClient() => CreateClient(new WebApplicationFactoryClientOptions { AllowAutoRedirect = false, HandleCookies = true });
+
+    public async Task<T> WithDbAsync<T>(Func<ClinicDbContext, Task<T>> work)
+    {
+        ArgumentNullException.ThrowIfNull(work);
+        await using var scope = Services.CreateAsyncScope();
+        return await work(scope.ServiceProvider.GetRequiredService<ClinicDbContext>());
+    }
+
+    public async Task WithDbAsync(Func<ClinicDbContext, Task> work)
+    {
+        ArgumentNullException.ThrowIfNull(work);
+        await using var scope = Services.CreateAsyncScope();
+        await work(scope.ServiceProvider.GetRequiredService<ClinicDbContext>());
+    }
+
+    protected override void ConfigureWebHost(IWebHostBuilder builder)
+    {
+        ArgumentNullException.ThrowIfNull(builder);
+        if (UseTemplateDatabase)
+        {
+            TemplateDatabase.CopyTo(DataFolder);
+        }
+
+        builder.UseEnvironment(EnvironmentName);
+        builder.UseSetting("DataFolder", DataFolder);
+        builder.UseSetting("LoadDemoClinic", LoadDemo ? "true" : "false");
+        foreach (var (key, value) in Settings)
+        {
+            builder.UseSetting(key, value);
+        }
+
+        if (Clock is not null)
+        {
+            builder.ConfigureTestServices(services => services.AddSingleton(Clock));
+        }
+
+        if (LogCollector is not null)
+        {
+            // The capture sees every line (Debug and up, above appsettings.json's levels; the privacy pin on the
+            // framework's request lines still holds); the console stays quiet so the runs stay fast.
+            foreach (var category in new[] { "Default", "LowVisionAid", "Microsoft.AspNetCore", "Microsoft.EntityFrameworkCore" })
+            {
+                builder.UseSetting("Logging:LogLevel:" + category, "Debug");
+            }
+
+            builder.ConfigureLogging(logging =>
+            {
+                logging.ClearProviders();
+                logging.SetMinimumLevel(LogLevel.Debug);
+                logging.AddProvider(new FakeLoggerProvider(LogCollector));
+            });
+        }
+    }
+
+    protected override void Dispose(bool disposing)
+    {
+        base.Dispose(disposing);
+        if (disposing && _ownsDataFolder)
+        {
+            SqliteConnection.ClearAllPools();
+            try
+            {
+                Directory.Delete(DataFolder, recursive: true);
+            }
+            catch (DirectoryNotFoundException)
+            {
+            }
+            catch (IOException)
+            {
+                // A file still open on a slow file system; the system's temp cleaner takes it later.
+            }
+        }
+    }
+}
