@@ -303,7 +303,7 @@ public class ClientHandoutRendererTests
         var word = Gen.String[Gen.Char['a', 'z'], 1, 12];
         var sentence = word.Array[1, 40].Select(w => string.Join(' ', w));
 
-        Gen.Select(sentence.Array[1, 6], Gen.Int[0, 2].Select(i => new[] { 18.0, 24.0, 36.0 }[i])).Sample((lines, body) =>
+        Gen.Select(sentence.Array[1, 6], Gen.Int[0, 2].Select(i => new[] { 18.0, 24.0, 35.0 }[i])).Sample((lines, body) =>
         {
             var model = SampleModels.Handout(body) with { Practice = lines };
             var text = Read(model);

@@ -83,6 +83,7 @@ public sealed record ClientHandout(
 /// null or zero when it is used with the distance glasses (or none).
 /// </param>
 /// <param name="TrialDeclined">True when the client's trial of it ended declined: it is left out of the handout.</param>
+/// <param name="Screen">For screen magnification, the zoom and polarity the plan worked out; null otherwise.</param>
 public sealed record HandoutDevice(
     string Name,
     string WhatItIs,
@@ -93,7 +94,13 @@ public sealed record HandoutDevice(
     HandoutView? View = null,
     OptionKind? Kind = null,
     Power? ReadingAdd = null,
-    bool TrialDeclined = false);
+    bool TrialDeclined = false,
+    HandoutScreen? Screen = null);
+
+/// <summary>The built-in screen setting the plan worked out (the core's <c>ScreenMagnificationOption</c>).</summary>
+/// <param name="ZoomPercent">The text size or zoom, per cent of the text as it is now.</param>
+/// <param name="ReversedPolarity">True when light letters on a dark background are advised (poor contrast or light).</param>
+public sealed record HandoutScreen(double ZoomPercent, bool ReversedPolarity);
 
 /// <summary>
 /// The print the client reads comfortably, from which the handout's body size follows: the critical print size

@@ -17,6 +17,9 @@ namespace LowVisionAid.Reports.Handouts;
 public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null) : IReportRenderer<ClientHandout>
 {
     private const double Margin = 54; // 0.75 in
+    // From the short text's size on, a 0.5 in margin (within what office printers print) gives a line and a few
+    // letters more on each page.
+    private const double LargePrintMargin = 36;
     // A last page less full than this is laid out again with tighter gaps between blocks.
     private const double NearlyEmpty = 0.25;
     private readonly IFormatProvider _culture = formatProvider ?? CultureInfo.InvariantCulture;
@@ -56,20 +59,23 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
         using var document = PdfOutput.Create("Your magnifier plan, client " + model.ClientCode, model.Clinic.Name, model.IssuedOn);
         double body = fit.BodyPoints;
         double line = body * 1.5;
+        double margin = fit.ShortText ? LargePrintMargin : Margin;
         double gap = line * 0.25 * spacing;
         var regular = new XFont(HyperlegibleFont.FamilyName, body, XFontStyleEx.Regular);
         var bold = new XFont(HyperlegibleFont.FamilyName, body, XFontStyleEx.Bold);
         // Headings stand out by weight and a few points; at very large body sizes they grow no more than that.
-        var heading = new XFont(HyperlegibleFont.FamilyName, body + Math.Min(body / 3, 8), XFontStyleEx.Bold);
-        var title = new XFont(HyperlegibleFont.FamilyName, body + Math.Min(body * 2 / 3, 14), XFontStyleEx.Bold);
+        // In the short version (very large print) headings are the body size in bold, which saves a line on most.
+        var heading = new XFont(HyperlegibleFont.FamilyName, fit.ShortText ? body : body + Math.Min(body / 3, 8), XFontStyleEx.Bold);
+        var title = new XFont(HyperlegibleFont.FamilyName, body + Math.Min(body * 2 / 3, fit.ShortText ? 8 : 14), XFontStyleEx.Bold);
         (int, double) count;
 
-        using (var flow = new PageFlow(document, model.Paper, Margin, body * 2.5, "Client code " + model.ClientCode, regular, pageCount)
+        // The footer: its line of text at the body size, the rule above it and a little white between.
+        using (var flow = new PageFlow(document, model.Paper, margin, body * 2.1, "Client code " + model.ClientCode, regular, pageCount)
         {
             HeadingRoom = (heading.Size * 1.4) + (line * 0.5 * spacing) + (gap * 2),
         })
         {
-            double TextHeight(string text, double indent = 0) => flow.Height(text, regular, line, indent);
+            double TextHeight(string text, double indent = 0, bool whole = false) => flow.Height(text, regular, line, indent, whole);
 
             // A heading stays on the page of the block after it.
             void Heading(string text, double next)
@@ -105,8 +111,47 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
                 items = [.. items.Where(i => !string.IsNullOrWhiteSpace(i))];
                 if (items.Count == 0)
                     return;
-                Heading(name, TextHeight(items[0], body * 1.5));
+                Heading(name, TextHeight(items[0], body * 1.5, whole: true));
                 List(items, numbered: false);
+            }
+
+            void Contact(bool full)
+            {
+                // The contact block: heading, name and every way to reach the clinic (the phone alone in the short text).
+                var contact = new List<string> { model.Clinic.Name, "Phone: " + model.Clinic.Phone };
+                if (full && !string.IsNullOrWhiteSpace(model.Clinic.Email))
+                    contact.Add("Email: " + model.Clinic.Email);
+                if (full && !string.IsNullOrWhiteSpace(model.Clinic.Address))
+                    contact.Add("Address: " + model.Clinic.Address);
+                Heading("Questions? Contact us", TextHeight(contact[0]));
+                foreach (var item in contact)
+                    Text(item);
+            }
+
+            if (fit.ShortText)
+            {
+                // Very large print: the essentials only; the clinician is told to offer the whole text in other forms.
+                flow.Paragraph("Your magnifier plan", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
+                Text(ClientLine(model));
+                flow.Space(gap);
+                Text(HandoutWording.ShortOtherForm);
+                foreach (var device in devices)
+                {
+                    var use = "Use it for: " + device.Task;
+                    Heading("Your " + LowerFirst(device.Name), TextHeight(use));
+                    Text(use);
+                    if (DeviceWording.Setting(device.Kind, device.Screen) is { } setting)
+                        Text(setting);
+                    foreach (var distance in device.Distances)
+                        Text(distance.What + ": " + ShortLength(distance.Distance, model.Paper));
+                    if (DeviceWording.ShortGlasses(device.Kind, device.ReadingAdd, _culture) is { } glasses)
+                        Text("Glasses: " + glasses + ".");
+                }
+
+                Section("Stay safe", HandoutWording.ShortCautionsFor(devices));
+                Contact(full: false);
+                count = (flow.PageCount, flow.LastPageFill);
+                return (pageCount is null ? default : PdfOutput.Save(document), count);
             }
 
             flow.Paragraph("Your magnifier plan", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
@@ -137,7 +182,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
                 if (device.Distances.Count > 0)
                 {
                     var distances = device.Distances.Select(d => d.What + ": " + Length(d.Distance)).ToList();
-                    SubHeading("Distances to keep", TextHeight(distances[0], body * 1.5));
+                    SubHeading("Distances to keep", TextHeight(distances[0], body * 1.5, whole: true));
                     List(distances, numbered: false);
                 }
 
@@ -153,7 +198,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
 
                 if (device.HowToUse.Count > 0)
                 {
-                    SubHeading("How to use it", TextHeight(device.HowToUse[0], body * 1.8));
+                    SubHeading("How to use it", TextHeight(device.HowToUse[0], body * 1.8, whole: true));
                     List(device.HowToUse, numbered: true);
                 }
             }
@@ -169,20 +214,12 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             double targetPoints = PointsFor(model.TargetPrint);
             var target = new XFont(HyperlegibleFont.FamilyName, targetPoints, XFontStyleEx.Regular);
             double checkLine = Math.Max(targetPoints * 1.5, line);
-            Heading("Check your print size", TextHeight(checkText) + flow.Height(HandoutWording.TargetSizeLine, target, checkLine));
+            Heading("Check your print size", TextHeight(checkText));
             Text(checkText);
             flow.Space(gap);
             flow.Paragraph(HandoutWording.TargetSizeLine, target, checkLine);
 
-            // The contact block stays whole: heading, name and every way to reach the clinic.
-            var contact = new List<string> { model.Clinic.Name, "Phone: " + model.Clinic.Phone };
-            if (!string.IsNullOrWhiteSpace(model.Clinic.Email))
-                contact.Add("Email: " + model.Clinic.Email);
-            if (!string.IsNullOrWhiteSpace(model.Clinic.Address))
-                contact.Add("Address: " + model.Clinic.Address);
-            Heading("Questions? Contact us", contact.Sum(c => TextHeight(c)));
-            foreach (var item in contact)
-                Text(item);
+            Contact(full: true);
 
             count = (flow.PageCount, flow.LastPageFill);
         }
@@ -242,6 +279,20 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
         name.Length > 1 && char.IsUpper(name[0]) && !char.IsUpper(name[1]) ? char.ToLowerInvariant(name[0]) + name[1..] : name;
 
     private string Date(DateOnly date) => date.ToString("dddd d MMMM yyyy", _culture);
+
+    // The short version gives each distance in one unit, a line shorter at 48 pt: inches or feet where the clinic
+    // prints on Letter (imperial units), centimetres or metres on A4.
+    private string ShortLength(Distance distance, PaperSize paper)
+    {
+        var magnitude = distance.Abs();
+        return (paper, magnitude.Metres >= 1) switch
+        {
+            (PaperSize.Letter, true) => (magnitude.Inches / 12).ToString("0.#", _culture) + " feet",
+            (PaperSize.Letter, false) => magnitude.Inches.ToString("0.#", _culture) + " inches",
+            (_, true) => magnitude.Metres.ToString("0.#", _culture) + " m",
+            _ => magnitude.Centimetres.ToString("0.#", _culture) + " cm",
+        };
+    }
 
     private string Length(Distance distance)
     {

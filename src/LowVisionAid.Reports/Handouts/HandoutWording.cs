@@ -18,6 +18,13 @@ public static class HandoutWording
     public const string DoNotMove =
         "Do not walk, use stairs or drive while you are looking through it. Sit down to use it, and put it down before you get up.";
 
+    /// <summary>
+    /// Spectacle-mounted telescope: never while walking or driving; driving with one only where licensed practice
+    /// and the licensing rules allow it (methods.md §7.3, §7.4).
+    /// </summary>
+    public const string TelescopeGlassesMoving =
+        "Never walk or drive while you look through the telescope glasses. Some places let a few people drive with them after special training, but only when the licensing authority and your eye-care practitioner say so.";
+
     /// <summary>Driving rules differ by place (methods.md §7.4).</summary>
     public const string DrivingRules =
         "The rules on driving with sight loss differ from place to place. Ask your licensing authority and your eye-care practitioner.";
@@ -61,13 +68,51 @@ public static class HandoutWording
         var list = devices.ToList();
         bool lens = list.Exists(d => DeviceWording.HasLens(d.Kind));
         bool power = list.Exists(d => d.HasLightOrBattery || d.Kind == Optics.Options.OptionKind.VideoMagnifier);
+        bool telescopeGlasses = list.Exists(d => d.Kind == Optics.Options.OptionKind.SpectacleTelescope);
         return
         [
             .. lens ? new[] { SunlightFire, NoSunViewing, DoNotMove } : [],
+            .. telescopeGlasses ? new[] { TelescopeGlassesMoving } : [],
             DrivingRules, SupportsPractitioner, SuddenChange, SeeingThingsNotThere,
             .. power ? new[] { LightOrBattery } : [],
         ];
     }
+
+    /// <summary>The short handout's sun and fire line, for devices with a lens (methods.md §7.1, §7.2).</summary>
+    public const string ShortSun = "Keep it out of the sun: a lens in sunlight can start a fire. Never look at the sun through it.";
+
+    /// <summary>The short handout's line on moving, for devices with a lens (methods.md §7.3, §7.4).</summary>
+    public const string ShortDoNotMove = "Do not walk or drive while you look through it.";
+
+    /// <summary>The short handout's line on moving with telescope glasses (methods.md §7.3, §7.4).</summary>
+    public const string ShortTelescopeGlasses =
+        "Never walk or drive while you look through the telescope glasses, unless your licensing authority and eye-care practitioner say you may.";
+
+    /// <summary>The short handout's line on sudden change (methods.md §7.5).</summary>
+    public const string ShortSuddenChange = "If your sight changes suddenly, see an eye-care practitioner promptly.";
+
+    /// <summary>The short handout's line for a device with a light or battery (methods.md §7.8).</summary>
+    public const string ShortLightOrBattery = "Keep its charger and plug away from water.";
+
+    /// <summary>
+    /// The one or two safety lines of the short handout for very large print (<see cref="HandoutPrint.ShortTextFrom"/>):
+    /// with a lens, the sun and fire line and the line on moving (telescope glasses have their own); without one,
+    /// sudden change, and the charger for a device with a light or battery. The rest is in the full text the
+    /// clinic offers read aloud or recorded.
+    /// </summary>
+    /// <param name="devices">The devices the handout describes.</param>
+    public static IReadOnlyList<string> ShortCautionsFor(IEnumerable<HandoutDevice> devices)
+    {
+        ArgumentNullException.ThrowIfNull(devices);
+        var list = devices.ToList();
+        if (list.Exists(d => DeviceWording.HasLens(d.Kind)))
+            return [ShortSun, list.Exists(d => d.Kind == Optics.Options.OptionKind.SpectacleTelescope) ? ShortTelescopeGlasses : ShortDoNotMove];
+        bool power = list.Exists(d => d.HasLightOrBattery || d.Kind == Optics.Options.OptionKind.VideoMagnifier);
+        return power ? [ShortSuddenChange, ShortLightOrBattery] : [ShortSuddenChange];
+    }
+
+    /// <summary>Printed near the top of the short handout for very large print.</summary>
+    public const string ShortOtherForm = "Ask the clinic for the full sheet, read aloud or recorded.";
 
     /// <summary>The heading of the to-scale window of what the client sees at once.</summary>
     public const string ViewHeading = "What you see at once";

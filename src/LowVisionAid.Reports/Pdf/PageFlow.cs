@@ -9,8 +9,8 @@ namespace LowVisionAid.Reports.Pdf;
 /// Lays text down the pages of a document from top to bottom: left-aligned, word-wrapped, black on white, a new
 /// page when the next block does not fit. Every block is tagged for screen readers (PDF/UA through PDFsharp's
 /// <see cref="UAManager"/>): headings, paragraphs, lists, tables and figures in reading order; rules and footers
-/// are artifacts. A paragraph or list item is never split across pages unless it is taller than a page, and a
-/// heading is kept with what follows it. Each page's footer ("Page i of n" and a line of text) is drawn as an
+/// are artifacts. Running text goes on over a page break only between sentences; a heading, list item or step is
+/// kept whole unless it is taller than a page; a heading is kept with the first line or sentence after it. Each page's footer ("Page i of n" and a line of text) is drawn as an
 /// artifact when the page starts, so the caller lays out twice: once to count the pages, then with the count.
 /// </summary>
 internal sealed partial class PageFlow : IDisposable
@@ -92,40 +92,34 @@ internal sealed partial class PageFlow : IDisposable
     public void End() => _tags.End();
 
     /// <summary>
-    /// The height <see cref="Paragraph"/> needs to start this text on a page: all of it, or its first sentence when
-    /// the whole is taller than a page less <see cref="HeadingRoom"/> (it is then laid out a sentence at a time).
+    /// The height <see cref="Paragraph"/> needs to start this text on a page: its first sentence for running text,
+    /// or all of it for a unit kept whole (a list item, a step, a heading) unless that is taller than a page less
+    /// <see cref="HeadingRoom"/> (it is then laid out a sentence at a time too).
     /// </summary>
-    public double Height(string text, XFont font, double lineHeight, double indent = 0)
-    {
-        var fitted = GlyphCoverage.Fit(text);
-        double all = Wrap(fitted, font, Width - indent).Count * lineHeight;
-        return all <= TallBlock ? all : Wrap(SentenceEnd().Split(fitted)[0], font, Width - indent).Count * lineHeight;
-    }
+    /// <param name="text">The text.</param>
+    /// <param name="font">Its font.</param>
+    /// <param name="lineHeight">Its line height.</param>
+    /// <param name="indent">Its indent from the left margin.</param>
+    /// <param name="whole">True for a unit kept whole (a list item, a step, a heading).</param>
+    public double Height(string text, XFont font, double lineHeight, double indent = 0, bool whole = false) =>
+        Wrap(Pieces(GlyphCoverage.Fit(text), font, lineHeight, indent, whole)[0], font, Width - indent).Count * lineHeight;
 
     /// <summary>
-    /// Wrapped lines of text as one tagged block (a paragraph, a heading, or a list item when it has a marker), kept
-    /// whole on one page. Returns the number of lines drawn.
+    /// Wrapped lines of text as one tagged block (a paragraph, a heading, or a list item when it has a marker).
+    /// Running text (a paragraph) may go on over a page break, but only between sentences: a sentence is never
+    /// split. A heading or list item (a step) is kept whole on one page unless it is taller than a page, when it
+    /// too breaks only between sentences. A heading keeps <paramref name="keepWithNext"/> points (the first line or
+    /// sentence of what follows) on its page. Returns the number of lines drawn.
     /// </summary>
     public int Paragraph(string text, XFont font, double lineHeight, double indent = 0, string? marker = null,
         PdfBlockLevelElementTag tag = PdfBlockLevelElementTag.Paragraph, double keepWithNext = 0)
     {
         double x = Left + indent;
-        var lines = Wrap(GlyphCoverage.Fit(text), font, Width - indent);
-        // A block taller than a page is laid out a sentence at a time, each sentence on a new line and kept whole.
-        var keep = new HashSet<int>();
-        if (lines.Count * lineHeight > TallBlock)
-        {
-            lines = [];
-            foreach (var sentence in SentenceEnd().Split(GlyphCoverage.Fit(text)))
-            {
-                keep.Add(lines.Count);
-                lines.AddRange(Wrap(sentence, font, Width - indent));
-            }
-        }
-
-        // Whole, or (laid out by sentence) at least its first sentence, stays on this page with what must follow.
-        int first = keep.Count > 1 ? keep.Order().ElementAt(1) : lines.Count;
-        KeepTogether((first * lineHeight) + keepWithNext);
+        double width = Width - indent;
+        bool whole = marker is not null || tag != PdfBlockLevelElementTag.Paragraph;
+        var units = Pieces(GlyphCoverage.Fit(text), font, lineHeight, indent, whole);
+        // The first unit starts on this page only with room for it (and, for a single unit, what must follow it).
+        KeepTogether((Wrap(units[0], font, width).Count * lineHeight) + (units.Count == 1 ? keepWithNext : 0));
         if (marker is not null)
         {
             _tags.BeginElement(PdfBlockLevelElementTag.ListItem);
@@ -139,20 +133,60 @@ internal sealed partial class PageFlow : IDisposable
             _tags.BeginElement(tag);
         }
 
-        for (int i = 0; i < lines.Count; i++)
+        int drawn = 0;
+        for (int next = 0; next < units.Count;)
         {
-            if (keep.Contains(i))
-                KeepTogether((keep.Where(k => k > i).DefaultIfEmpty(lines.Count).Min() - i) * lineHeight);
-            KeepTogether(lineHeight);
-            // A trailing space keeps the words of one line apart from the next line's in the extracted text.
-            Graphics.DrawString(i < lines.Count - 1 ? lines[i] + " " : lines[i], font, XBrushes.Black, x, Baseline(font, lineHeight));
-            Y += lineHeight;
+            int room = (int)Math.Floor(((Bottom - Y) / lineHeight) + 1e-6);
+            // As many whole units as fit on this page; the greedy wrap of the first k units gives the same lines as
+            // the whole text's up to the end of unit k, so the paragraph reads the same, only broken there.
+            List<string>? fits = null;
+            int taken = 0;
+            for (int k = 1; next + k <= units.Count; k++)
+            {
+                var lines = Wrap(string.Join(' ', units.Skip(next).Take(k)), font, width);
+                if (lines.Count > room)
+                    break;
+                (fits, taken) = (lines, k);
+            }
+
+            if (fits is null && Y > _margin)
+            {
+                NewPage();
+                continue;
+            }
+
+            // A single sentence taller than a whole page is the one thing left to break between lines.
+            fits ??= Wrap(units[next], font, width);
+            taken = Math.Max(taken, 1);
+            next += taken;
+            for (int i = 0; i < fits.Count; i++)
+            {
+                KeepTogether(lineHeight);
+                // A trailing space keeps the words of one line apart from the next line's in the extracted text.
+                bool last = next >= units.Count && i == fits.Count - 1;
+                Graphics.DrawString(last ? fits[i] : fits[i] + " ", font, XBrushes.Black, x, Baseline(font, lineHeight));
+                Y += lineHeight;
+                drawn++;
+            }
+
+            if (next < units.Count)
+                NewPage();
         }
 
         _tags.End();
         if (marker is not null)
             _tags.End();
-        return lines.Count;
+        return drawn;
+    }
+
+    // The units a block is broken into across pages: each sentence of running text; the whole of a unit kept whole,
+    // unless it is taller than a page less the heading room.
+    private List<string> Pieces(string text, XFont font, double lineHeight, double indent, bool whole)
+    {
+        if (whole && Wrap(text, font, Width - indent).Count * lineHeight <= TallBlock)
+            return [text];
+        var sentences = SentenceEnd().Split(text).Where(s => s.Length > 0).ToList();
+        return sentences.Count > 0 ? sentences : [text];
     }
 
     /// <summary>
@@ -344,6 +378,6 @@ internal sealed partial class PageFlow : IDisposable
         Footer(page, _document.PageCount);
     }
 
-    [System.Text.RegularExpressions.GeneratedRegex(@"(?<=[.!?])\s+")]
+    [System.Text.RegularExpressions.GeneratedRegex(@"(?<=[.!?]) +")]
     private static partial System.Text.RegularExpressions.Regex SentenceEnd();
 }

@@ -20,6 +20,11 @@ namespace LowVisionAid.Reports.Summaries;
 /// <param name="Eyes">Distance acuity of each eye (and both) as typed and as read, or null.</param>
 /// <param name="Near">Near acuity as typed and as read, or null.</param>
 /// <param name="ReadingCurve">The reading-speed curve and its results, or null when none was measured.</param>
+/// <param name="HandoutReader">
+/// The print the client reads comfortably, as the handout is given it; with <paramref name="HandoutMinimumPoints"/> the
+/// summary says what size the handout is printed at and, for very large print, that other forms should be offered.
+/// </param>
+/// <param name="HandoutMinimumPoints">The clinic's smallest handout body size in points.</param>
 public sealed record ClinicianSummary(
     ClinicContact Clinic,
     string ClientCode,
@@ -35,7 +40,9 @@ public sealed record ClinicianSummary(
     IReadOnlyList<Figures.FigureTable>? FigureTables = null,
     IReadOnlyList<EyeAcuity>? Eyes = null,
     NearAcuityRecord? Near = null,
-    ReadingCurveRecord? ReadingCurve = null);
+    ReadingCurveRecord? ReadingCurve = null,
+    Handouts.HandoutReader? HandoutReader = null,
+    double HandoutMinimumPoints = Handouts.ClientHandout.DefaultBodyPoints);
 
 /// <summary>One eye's distance acuity as the clinician typed it and as the plan read it.</summary>
 /// <param name="Eye">Which eye, in words: "Right eye", "Left eye", "Both eyes".</param>

@@ -79,7 +79,7 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                 flow.End();
             }
 
-            double keepWithHeight(string text) => flow.Height(text, regular, Line, BodyPoints * 1.5);
+            double keepWithHeight(string text) => flow.Height(text, regular, Line, BodyPoints * 1.5, whole: true);
 
             flow.Paragraph("Magnifier plan: clinician summary", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
             flow.Paragraph(string.Join("  ·  ", new[] { model.Clinic.Name, model.Clinic.Phone, model.Clinic.Email, model.Clinic.Address }
@@ -155,6 +155,14 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                 Heading(figure.Caption);
                 var columns = Enumerable.Repeat(1.0 / figure.Columns.Count, figure.Columns.Count).ToArray();
                 Table(columns, [.. figure.Columns], figure.Rows.Select(r => Enumerable.Range(0, figure.Columns.Count).Select(c => c < r.Count ? r[c] : string.Empty).ToArray()));
+            }
+
+            if (model.HandoutReader is not null)
+            {
+                var fit = Handouts.HandoutPrint.Fit(model.HandoutReader, model.HandoutMinimumPoints, _culture);
+                Heading("Client handout");
+                flow.Paragraph(fit.ClinicianNote ?? string.Create(_culture,
+                    $"Printed at {fit.BodyPoints:0} pt, at least the print the client needs ({(fit.Needed is { } m ? m.M.ToString("0.#", _culture) + "M, " : string.Empty)}{fit.NeededPoints ?? fit.BodyPoints:0} pt) and the clinic's smallest size."), regular, Line);
             }
 
             flow.Space(Line * spacing);

@@ -94,7 +94,9 @@ public sealed class PlanReports(
             plan.HasChosenOption ? [.. Figures(plan, "summary").Select(f => f.Table)] : null,
             plan.Eyes,
             plan.Near,
-            plan.ReadingCurve);
+            plan.ReadingCurve,
+            plan.Reader ?? Reader(plan),
+            plan.BodyPoints);
     }
 
     /// <summary>

@@ -19,7 +19,7 @@ internal static class SampleClients
         public override string ToString() => Name;
     }
 
-    public static IReadOnlyList<Client> All { get; } = [Ada, Bryn, Cerys, Dai];
+    public static IReadOnlyList<Client> All { get; } = [Ada, Bryn, Cerys, Dai, Elin, Fflur];
 
     public static TheoryData<string> Names => [.. All.Select(c => c.Name)];
 
@@ -108,6 +108,59 @@ internal static class SampleClients
         Reader = new HandoutReader(Distance.FromCentimetres(40), Distance.FromCentimetres(25), Threshold: PrintSize.FromM(2.0)),
         Paper = PaperSize.Letter,
     });
+
+    // 4.0M read at 40 cm; reserve 2:1 gives 8.0M at 40 cm, read at 40 cm: 8M, about 66 pt: more than paper holds,
+    // so the short version. Two hand magnifiers (a newspaper and medicine labels), as a clinic often gives an older
+    // reader with macular degeneration; the shape of the demo clinic's first plan, whose handout ran to 38 pages.
+    private static Client Elin => new("Elin", 8, Base("EL-0505", "Elin Penrose") with
+    {
+        Devices =
+        [
+            new HandoutDevice(
+                "Hand magnifier, +20 D, 45 mm", DeviceWording.WhatItIs(OptionKind.HandMagnifier), "Reading the local weekly paper",
+                DeviceWording.HowToUse(OptionKind.HandMagnifier),
+                [
+                    new HandoutDistance(DeviceWording.DistanceWhat(OptionKind.HandMagnifier), Distance.FromCentimetres(5)),
+                    new HandoutDistance(DeviceWording.EyeToLens, Distance.FromCentimetres(25)),
+                ],
+                View: new HandoutView(Distance.FromMillimetres(8), 5, PrintSize.FromM(1.0)),
+                Kind: OptionKind.HandMagnifier),
+            new HandoutDevice(
+                "Hand magnifier with a light, +12 D, 60 mm", DeviceWording.WhatItIs(OptionKind.HandMagnifier), "Reading medicine labels",
+                DeviceWording.HowToUse(OptionKind.HandMagnifier),
+                [
+                    new HandoutDistance(DeviceWording.DistanceWhat(OptionKind.HandMagnifier), Distance.FromCentimetres(8.3)),
+                    new HandoutDistance(DeviceWording.EyeToLens, Distance.FromCentimetres(25)),
+                ],
+                HasLightOrBattery: true,
+                Kind: OptionKind.HandMagnifier),
+        ],
+        Reader = new HandoutReader(Distance.FromCentimetres(40), Distance.FromCentimetres(40), Threshold: PrintSize.FromM(4.0)),
+    });
+
+    // Critical print size 3.2M at 40 cm, handout read at 40 cm: 3.2M, about 27 pt. The two classes issue 10 added:
+    // telescope glasses for the television and the tablet's own text size, 250 % with light letters on dark (her
+    // contrast is poor), at 40 cm with a +2.50 D add (1/0.40 m; methods.md §1.2).
+    private static Client Fflur => new("Fflur", 3.2, Base("FF-0606", "Fflur Angove") with
+    {
+        Devices =
+        [
+            new HandoutDevice(
+                "Telescope glasses, 3×", DeviceWording.WhatItIs(OptionKind.SpectacleTelescope), "Watching the television",
+                DeviceWording.HowToUse(OptionKind.SpectacleTelescope),
+                [new HandoutDistance(DeviceWording.DistanceWhat(OptionKind.SpectacleTelescope), Distance.FromMetres(3))],
+                Kind: OptionKind.SpectacleTelescope),
+            new HandoutDevice(
+                "Tablet text size and zoom", DeviceWording.WhatItIs(OptionKind.ScreenMagnification), "Reading messages on the tablet",
+                DeviceWording.HowToUse(OptionKind.ScreenMagnification, Screen),
+                [new HandoutDistance(DeviceWording.DistanceWhat(OptionKind.ScreenMagnification), Distance.FromCentimetres(40))],
+                Kind: OptionKind.ScreenMagnification, ReadingAdd: Power.FromDioptres(2.5), Screen: Screen),
+        ],
+        Reader = new HandoutReader(Distance.FromCentimetres(40), Distance.FromCentimetres(40), CriticalPrint: PrintSize.FromM(3.2)),
+    });
+
+    /// <summary>Fflur's tablet setting: 250 % with light letters on dark.</summary>
+    public static HandoutScreen Screen => new(250, ReversedPolarity: true);
 
     private static ClientHandout Base(string code, string name) => SampleModels.Handout() with
     {
