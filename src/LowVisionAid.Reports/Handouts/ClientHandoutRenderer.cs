@@ -160,11 +160,6 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             Text("Given on: " + Date(model.IssuedOn));
             Text("Next visit: " + (model.FollowUpOn is { } next ? Date(next) : "the clinic will call you to book it"));
             Text("Clinic phone: " + model.Clinic.Phone);
-            if (!fit.FitsOnPaper)
-            {
-                flow.Space(gap);
-                Text(HandoutWording.AskForOtherForm);
-            }
 
             foreach (var device in devices)
             {

@@ -45,10 +45,6 @@ public static class HandoutWording
     public const string LightOrBattery =
         "If your magnifier has a light or a battery, charge it as its instructions say, and keep plugs and chargers away from water.";
 
-    /// <summary>Printed near the top when the client needs larger print than paper holds.</summary>
-    public const string AskForOtherForm =
-        "You can have this sheet read aloud to you, or as a recording. Ask the clinic, or ask someone you trust to read it with you.";
-
     /// <summary>The line printed at the client's target print size.</summary>
     public const string TargetSizeLine = "Can you read this line? It is the size of text you want to read.";
 

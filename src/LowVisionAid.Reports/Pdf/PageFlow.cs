@@ -365,7 +365,7 @@ internal sealed partial class PageFlow : IDisposable
         return joined;
     }
 
-    private static readonly HashSet<string> Units = ["D", "cm", "mm", "m", "M", "pt", "in", "inches", "feet", "×", "Δ"];
+    private static readonly HashSet<string> Units = ["D", "cm", "mm", "m", "M", "pt", "in", "inches", "feet", "×", "Δ", "%"];
 
     private void NewPage()
     {

@@ -139,6 +139,15 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                 Bullets("Cautions", option.Cautions);
             }
 
+            // What the client takes home, and what to offer besides when the print is very large.
+            if (model.HandoutReader is not null)
+            {
+                var fit = Handouts.HandoutPrint.Fit(model.HandoutReader, model.HandoutMinimumPoints, _culture);
+                Heading("Client handout");
+                flow.Paragraph(fit.ClinicianNote ?? string.Create(_culture,
+                    $"Printed at {fit.BodyPoints:0} pt, at least the print the client needs ({(fit.Needed is { } m ? m.M.ToString("0.#", _culture) + "M, " : string.Empty)}{fit.NeededPoints ?? fit.BodyPoints:0} pt) and the clinic's smallest size."), regular, Line);
+            }
+
             Heading("Trials and outcomes");
             if (model.Trials.Count == 0)
                 flow.Paragraph("No trial recorded yet.", regular, Line);
@@ -155,14 +164,6 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                 Heading(figure.Caption);
                 var columns = Enumerable.Repeat(1.0 / figure.Columns.Count, figure.Columns.Count).ToArray();
                 Table(columns, [.. figure.Columns], figure.Rows.Select(r => Enumerable.Range(0, figure.Columns.Count).Select(c => c < r.Count ? r[c] : string.Empty).ToArray()));
-            }
-
-            if (model.HandoutReader is not null)
-            {
-                var fit = Handouts.HandoutPrint.Fit(model.HandoutReader, model.HandoutMinimumPoints, _culture);
-                Heading("Client handout");
-                flow.Paragraph(fit.ClinicianNote ?? string.Create(_culture,
-                    $"Printed at {fit.BodyPoints:0} pt, at least the print the client needs ({(fit.Needed is { } m ? m.M.ToString("0.#", _culture) + "M, " : string.Empty)}{fit.NeededPoints ?? fit.BodyPoints:0} pt) and the clinic's smallest size."), regular, Line);
             }
 
             flow.Space(Line * spacing);
