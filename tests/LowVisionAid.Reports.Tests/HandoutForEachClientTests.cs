@@ -229,6 +229,20 @@ public class HandoutForEachClientTests
 
     [Theory]
     [MemberData(nameof(Clients))]
+    public void The_line_at_the_target_size_is_on_the_page_of_its_heading_and_explanation(string name)
+    {
+        var client = SampleClients.Named(name);
+        var (_, text) = Render(client);
+        if (HandoutPrint.Fit(client.Handout, CultureInfo.InvariantCulture).ShortText)
+            return; // the short version has no check line
+
+        var page = Assert.Single(text.PageWords, p => p.Contains("Check your print size", StringComparison.Ordinal));
+        Assert.Contains(PdfText.Normalise(HandoutWording.TargetSizeLine), page, StringComparison.Ordinal);
+        Assert.Contains("If it gets harder to read, call the clinic.", page, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [MemberData(nameof(Clients))]
     public void Never_points_above_or_below_on_the_page(string name)
     {
         var (_, text) = Render(SampleClients.Named(name));

@@ -209,7 +209,8 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             double targetPoints = PointsFor(model.TargetPrint);
             var target = new XFont(HyperlegibleFont.FamilyName, targetPoints, XFontStyleEx.Regular);
             double checkLine = Math.Max(targetPoints * 1.5, line);
-            Heading("Check your print size", TextHeight(checkText));
+            // The short check block stays whole with its heading: the line at the target size is read with its explanation.
+            Heading("Check your print size", TextHeight(checkText, whole: true) + gap + flow.Height(HandoutWording.TargetSizeLine, target, checkLine, whole: true));
             Text(checkText);
             flow.Space(gap);
             flow.Paragraph(HandoutWording.TargetSizeLine, target, checkLine);
