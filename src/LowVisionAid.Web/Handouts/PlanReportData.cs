@@ -60,6 +60,7 @@ public sealed record PlanReportData(
 /// <param name="TrialTask">The task its trial was for (e.g. "letters and bills"), printed instead of the goal's task.</param>
 /// <param name="AddNeeded">The reading add to wear with it, or null for the distance glasses.</param>
 /// <param name="WeighedReasons">Its reasons labelled for or against, or null.</param>
+/// <param name="Screen">For screen magnification, the zoom and polarity the plan worked out; null otherwise.</param>
 public sealed record ReportOption(
     string Name,
     OptionKind Family,
@@ -82,7 +83,8 @@ public sealed record ReportOption(
     bool Declined = false,
     string? TrialTask = null,
     Power? AddNeeded = null,
-    IReadOnlyList<OptionReason>? WeighedReasons = null);
+    IReadOnlyList<OptionReason>? WeighedReasons = null,
+    HandoutScreen? Screen = null);
 
 /// <summary>How an option came to be in the handout.</summary>
 public enum ChosenBy

@@ -33,13 +33,14 @@ public sealed class PlanReports(
             o.Name,
             DeviceWording.WhatItIs(o.Family),
             o.TrialTask ?? o.Task,
-            DeviceWording.HowToUse(o.Family),
+            DeviceWording.HowToUse(o.Family, o.Screen),
             Distances(o),
             o.HasLightOrBattery,
             o.Field is { } field && o.LettersInView is > 0 ? new HandoutView(field, o.LettersInView.Value, o.Target) : null,
             o.Family,
             o.AddNeeded,
-            o.Declined)).ToList();
+            o.Declined,
+            o.Screen)).ToList();
         return new ClientHandout(
             plan.Clinic,
             plan.ClientCode,
@@ -54,15 +55,8 @@ public sealed class PlanReports(
             plan.Chosen.Count > 0 ? plan.Chosen[0].Target : Optics.Quantities.PrintSize.FromM(1.0),
             plan.BodyPoints,
             plan.Paper,
-            plan.Reader ?? Reader(plan));
+            plan.Reader);
     }
-
-    // Until the plan carries the client's reading curve, the near threshold with the fluent reserve, read at the
-    // distance it was measured at.
-    private static HandoutReader? Reader(PlanReportData plan) =>
-        plan.Chosen.FirstOrDefault(o => o.Threshold is not null && o.TestDistance is not null) is { } o
-            ? new HandoutReader(o.TestDistance!.Value, o.TestDistance.Value, Threshold: o.Threshold)
-            : null;
 
     public ClinicianSummary Summary(PlanReportData plan)
     {
@@ -95,7 +89,7 @@ public sealed class PlanReports(
             plan.Eyes,
             plan.Near,
             plan.ReadingCurve,
-            plan.Reader ?? Reader(plan),
+            plan.Reader,
             plan.BodyPoints);
     }
 

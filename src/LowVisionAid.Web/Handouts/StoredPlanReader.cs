@@ -2,9 +2,11 @@ using System.Globalization;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Fonts;
+using LowVisionAid.Reports.Handouts;
 using LowVisionAid.Reports.Summaries;
 using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Web.Plans;
@@ -84,7 +86,8 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
                 var list = goal.List(choice.List);
                 if (choice.Index < list.Length)
                 {
-                    picked.Add(Option(list[choice.Index].Option, outputs, goal, inputs, imperial, null, ChosenBy.Clinician));
+                    var option = list[choice.Index].Option;
+                    picked.Add(Option(option, outputs, goal, inputs, imperial, trials.LastOrDefault(t => Matches(option, t)), ChosenBy.Clinician));
                 }
             }
             else
@@ -131,8 +134,77 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
             chosen,
             cautions,
             [.. trials.Select(t => new TrialRecord(t.TrialDate, t.DeviceDescription, t.Task is { } task ? PlanText.Task(task) : "—",
-                Result(t), Labels.Outcome(t.Outcome)))]);
+                Result(t), Labels.Outcome(t.Outcome)))],
+            Reader(outputs, inputs),
+            Eyes(visit),
+            Near(visit, inputs),
+            Curve(outputs, inputs));
     }
+
+    /// <summary>
+    /// The print the client reads comfortably, from the typed plan: the critical print size of the measured reading
+    /// curve (methods.md §2.5), else the near threshold with the fluent reserve (methods.md §2.3), both at the near
+    /// test distance. The handout is taken as held where that print was read, with the correction the client wore
+    /// there; <see cref="HandoutPrint.Needed"/> moves it if another reading distance is ever given.
+    /// </summary>
+    public static HandoutReader? Reader(TypedPlan plan, PlanInputs inputs)
+    {
+        ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(inputs);
+        var threshold = inputs.NearThresholdM is { } m && m > 0 ? PrintSize.FromM(m) : (PrintSize?)null;
+        if (plan.Goals.Select(g => g.ReadingCurve).FirstOrDefault(c => c?.CriticalPrintSize is not null) is { } curve)
+        {
+            return new HandoutReader(curve.TestDistance, curve.TestDistance, curve.CriticalPrintSize, threshold, inputs.FluentReserveUsed());
+        }
+
+        return threshold is not null && inputs.NearTestDistanceMetres is { } d && d > 0
+            ? new HandoutReader(Distance.FromMetres(d), Distance.FromMetres(d), null, threshold, inputs.FluentReserveUsed())
+            : null;
+    }
+
+    private static List<EyeAcuity>? Eyes(Visit visit)
+    {
+        var eyes = new List<EyeAcuity>();
+        foreach (var (eye, typed, read) in new[]
+        {
+            ("Right eye", visit.DistanceRightText, visit.DistanceRight),
+            ("Left eye", visit.DistanceLeftText, visit.DistanceLeft),
+            ("Both eyes", visit.DistanceBothText, visit.DistanceBoth),
+        })
+        {
+            if (!string.IsNullOrWhiteSpace(typed))
+            {
+                eyes.Add(new EyeAcuity(eye, typed.Trim(), read));
+            }
+        }
+
+        return eyes.Count > 0 ? eyes : null;
+    }
+
+    // Near acuity as typed ("1.6M at 40 cm") beside the numbers the plan was made with.
+    private static NearAcuityRecord? Near(Visit visit, PlanInputs inputs)
+    {
+        if (inputs.NearThresholdM is not { } m || !(m > 0) || inputs.NearTestDistanceMetres is not { } at || !(at > 0))
+        {
+            return null;
+        }
+
+        var typed = (visit.NearThresholdText ?? "").Trim();
+        return new NearAcuityRecord(
+            string.IsNullOrWhiteSpace(visit.NearTestDistanceText) ? typed : $"{typed} at {visit.NearTestDistanceText.Trim()}",
+            PrintSize.FromM(m),
+            Distance.FromMetres(at));
+    }
+
+    private static ReadingCurveRecord? Curve(TypedPlan plan, PlanInputs inputs) =>
+        plan.Goals.Select(g => g.ReadingCurve).FirstOrDefault(c => c is not null) is { } curve
+            ? new ReadingCurveRecord(
+                curve.TestDistance,
+                [.. inputs.ReadingSpeeds.Select(s => new ReadingCurvePoint(PrintSize.FromM(s.PrintM), s.WordsPerMinute))],
+                curve.CriticalPrintSize,
+                curve.MaximumReadingSpeed,
+                curve.Refusal)
+            : null;
 
     /// <summary>
     /// The clinic's contact line split at "·", ";" or a line break: a part that is mostly digits is the phone, a part
@@ -207,8 +279,17 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
             [.. PlanText.Figures(option, imperial).Select(f => new OptionFigure(f.Label, f.Value))],
             [.. ranked.Reasons.Select(PlanText.Reason)],
             PlanText.Notes(option),
-            chosenBy);
+            chosenBy,
+            trial?.Outcome == TrialOutcome.Declined,
+            trial?.Task is { } task ? TaskOf(task, inputs) : null,
+            option.AccommodationOrAddNeeded,
+            [.. ranked.Reasons.Select(r => new OptionReason(r.Text, r.InFavour))],
+            option is ScreenMagnificationOption screen ? new HandoutScreen(screen.ZoomPercent, screen.ReversedPolarityAdvised) : null);
     }
+
+    // The trial's task in the plan's words, with the detail of the goal recorded for that task ("Letters (bills)").
+    private static string TaskOf(GoalTask task, PlanInputs inputs) =>
+        PlanText.Task(task) + (inputs.Goals.FirstOrDefault(g => g.Task == task)?.Detail is { } detail ? $" ({detail})" : "");
 
     private static void Collect(PlannedGoal goal, bool imperial, List<string> cautions, List<MethodEstimate> estimates)
     {

@@ -325,7 +325,7 @@ public sealed partial class PlanReportPagesTests
     /// The clinic settings and kit (set up directly, as a clinic would have them), then a client, a visit typed into
     /// the visit form and a plan made by the visit page's plan handler. Returns the plan's id.
     /// </summary>
-    internal static async Task<int> MadePlanAsync(ClinicApp app, HttpClient browser, string code)
+    internal static async Task<int> MadePlanAsync(ClinicApp app, HttpClient browser, string code, Action<Dictionary<string, string>>? visitChanges = null)
     {
         await app.WithDbAsync(async db =>
         {
@@ -344,6 +344,7 @@ public sealed partial class PlanReportPagesTests
         visit["Input.Goals[0].Detail"] = "bills";
         visit.Remove("Input.ReadingSpeeds[0].PrintSize");
         visit.Remove("Input.ReadingSpeeds[0].WordsPerMinute");
+        visitChanges?.Invoke(visit);
         var created = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", visit);
         Assert.Equal(HttpStatusCode.Redirect, created.StatusCode);
         var visitUrl = created.Headers.Location!.OriginalString;
