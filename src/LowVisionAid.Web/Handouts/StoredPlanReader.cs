@@ -281,7 +281,8 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
             PlanText.Notes(option),
             chosenBy,
             trial?.Outcome == TrialOutcome.Declined,
-            trial?.Task is { } task ? TaskOf(task, inputs) : null,
+            // A device the handout holds because of its trial is for what it was tried for; a clinician's choice is for its goal.
+            chosenBy == ChosenBy.Trial && trial?.Task is { } task ? TaskOf(task, inputs) : null,
             option.AccommodationOrAddNeeded,
             [.. ranked.Reasons.Select(r => new OptionReason(r.Text, r.InFavour))],
             option is ScreenMagnificationOption screen ? new HandoutScreen(screen.ZoomPercent, screen.ReversedPolarityAdvised) : null);
