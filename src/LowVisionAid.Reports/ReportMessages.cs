@@ -27,4 +27,8 @@ public static class ReportMessages
 
     /// <summary>The method version is missing from a clinician summary.</summary>
     public const string NoMethodVersion = "The method version is missing. The clinical record must say which version of the methods was used.";
+
+    /// <summary>Every device the handout would describe was declined at its trial.</summary>
+    public const string OnlyDeclinedDevices =
+        "Every device chosen for this handout was declined at its trial, so there is nothing to give the client. Choose the device the client is taking home on the plan page, then print again.";
 }

@@ -31,8 +31,14 @@ public sealed class ReportResult
     /// <summary>The number of pages rendered; 0 on failure.</summary>
     public int PageCount { get; private init; }
 
-    internal static ReportResult Ok((byte[] Bytes, int Pages) pdf, string fileName) =>
-        new(pdf.Bytes, fileName, null) { PageCount = pdf.Pages };
+    /// <summary>
+    /// What the clinician should know about the document made, in words to show on the page (e.g. that the client
+    /// needs larger print than paper holds, or that a declined device was left out); empty when nothing.
+    /// </summary>
+    public IReadOnlyList<string> Notices { get; private init; } = [];
+
+    internal static ReportResult Ok((byte[] Bytes, int Pages) pdf, string fileName, IReadOnlyList<string>? notices = null) =>
+        new(pdf.Bytes, fileName, null) { PageCount = pdf.Pages, Notices = notices ?? [] };
 
     internal static ReportResult Fail(string error) => new(ReadOnlyMemory<byte>.Empty, null, error);
 }

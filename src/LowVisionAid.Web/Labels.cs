@@ -1,12 +1,13 @@
 using System.Globalization;
 using LowVisionAid.Data.Entities;
-using LowVisionAid.Optics.Planning;
-using LowVisionAid.Optics.Kit;
 using Microsoft.AspNetCore.Mvc.Rendering;
 
 namespace LowVisionAid.Web;
 
-/// <summary>The words the pages show for stored values: dates, choices and outcomes, in one place.</summary>
+/// <summary>
+/// The words the pages show for stored record values: dates, choices and outcomes. A plan's words (classes of
+/// option, device kinds, methods, tasks, reserves) are <see cref="Plans.PlanText"/>'s.
+/// </summary>
 internal static class Labels
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
@@ -35,22 +36,6 @@ internal static class Labels
         _ => "None booked",
     };
 
-    public static string Task(GoalTask task) => task switch
-    {
-        GoalTask.Newspaper => "Newspaper",
-        GoalTask.Book => "Book or magazine",
-        GoalTask.MedicationLabels => "Medication labels",
-        GoalTask.Phone => "Phone screen",
-        GoalTask.Writing => "Writing and forms",
-        GoalTask.Mail => "Letters and bills",
-        GoalTask.Television => "Television",
-        GoalTask.Faces => "Faces",
-        GoalTask.Other => "Other task",
-        GoalTask.Whiteboard => "Whiteboard or board",
-        GoalTask.Signs => "Signs",
-        _ => task.ToString(),
-    };
-
     public static string Eyes(UsefulEyes eyes) => eyes switch
     {
         UsefulEyes.Both => "Both eyes",
@@ -66,17 +51,6 @@ internal static class Labels
         HomeLighting.Dim => "Dim",
         HomeLighting.Poor => "Poor",
         _ => lighting.ToString(),
-    };
-
-    public static string Kind(DeviceKind kind) => kind switch
-    {
-        DeviceKind.SpectacleAdd => "Reading spectacles (high add)",
-        DeviceKind.HandMagnifier => "Hand magnifier",
-        DeviceKind.StandMagnifier => "Stand magnifier",
-        DeviceKind.NearTelescope => "Near telescope",
-        DeviceKind.DistanceTelescope => "Distance telescope",
-        DeviceKind.VideoMagnifier => "Video magnifier",
-        _ => kind.ToString(),
     };
 
     public static IReadOnlyList<SelectListItem> Choices<T>(Func<T, string> label) where T : struct, Enum =>

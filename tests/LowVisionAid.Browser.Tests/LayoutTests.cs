@@ -94,14 +94,15 @@ public sealed class LayoutTests(BrowserSession browser, AppServer app) : Browser
         // Arrange: the plan's trade-off pictures keep their drawn size on a narrow screen, so their labels stay readable.
         var page = await NewPageAsync(320, 256, largeText: true);
         await page.GotoAsync("Plans/1");
+        await page.Locator("details.trade-offs > summary").ClickAsync();
         var region = page.Locator(".trade-off-picture").First;
         await Assertions.Expect(region).ToHaveAttributeAsync("role", "region");
         await Assertions.Expect(region).ToHaveAttributeAsync("tabindex", "0");
         await Assertions.Expect(region).ToHaveAttributeAsync("aria-label", new System.Text.RegularExpressions.Regex(@"\(picture\)$"));
         Assert.True(await region.EvaluateAsync<bool>("r => r.scrollWidth > r.clientWidth"), "The picture fits 320 px, so this test no longer checks a scrolling region.");
 
-        // Act: from the last link before the figures, one Tab reaches the picture; the arrow key scrolls it.
-        await page.GetByRole(AriaRole.Link, new() { Name = "print view of the summary" }).FocusAsync();
+        // Act: from the figures' disclosure (opened above), one Tab reaches the picture; the arrow key scrolls it.
+        await page.Locator("details.trade-offs > summary").FocusAsync();
         await page.Keyboard.PressAsync("Tab");
         await Assertions.Expect(region).ToBeFocusedAsync();
         var outline = await region.EvaluateAsync<string>("r => getComputedStyle(r).outlineStyle");

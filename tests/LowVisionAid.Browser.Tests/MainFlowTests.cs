@@ -156,10 +156,11 @@ public sealed class MainFlowTests(BrowserSession browser, AppServer app) : Brows
         await Assertions.Expect(plan.Heading.Page.GetByText($"the visit of {Shown(flow.VisitDate)}")).ToBeVisibleAsync();
         await Assertions.Expect(plan.Goal(1).GetByRole(AriaRole.Heading, new() { Level = 2 })).ToHaveTextAsync("Goal 1: Newspaper, target 1M");
         await Assertions.Expect(plan.RequiredPower(1)).ToContainTextAsync("20.00 D");
+        await plan.OpenEstimatesAsync(1);
         var estimates = plan.Estimates(1);
-        await Assertions.Expect(EstimateRow(estimates, "Near acuity (equivalent viewing distance)")).ToContainTextAsync("20.00 D");
-        await Assertions.Expect(EstimateRow(estimates, "Near acuity (equivalent viewing distance)")).ToContainTextAsync("5 cm");
-        await Assertions.Expect(EstimateRow(estimates, "Kestenbaum's rule with reserve")).ToContainTextAsync("20.00 D");
+        await Assertions.Expect(EstimateRow(estimates, "Near-acuity method (equivalent viewing distance)")).ToContainTextAsync("20.00 D");
+        await Assertions.Expect(EstimateRow(estimates, "Near-acuity method (equivalent viewing distance)")).ToContainTextAsync("5 cm");
+        await Assertions.Expect(EstimateRow(estimates, "Kestenbaum's rule, for the target print and reserve")).ToContainTextAsync("20.00 D");
         Assert.True(await plan.Options(1).CountAsync() >= 1, "The plan shows no option for the newspaper goal.");
         await Assertions.Expect(plan.FirstOptionHeading(1)).ToHaveTextAsync(new Regex(@"^1\. ", RegexOptions.None, TimeSpan.FromSeconds(1)));
         await Assertions.Expect(plan.Options(1).First).ToContainTextAsync("Power needed");

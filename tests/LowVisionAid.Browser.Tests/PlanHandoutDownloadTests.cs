@@ -36,9 +36,13 @@ public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, App
         Assert.EndsWith(".pdf", download.SuggestedFilename, StringComparison.OrdinalIgnoreCase);
         var text = await ReadAsync(download, "handout");
         Assert.Contains(LitMagnifier, text, StringComparison.OrdinalIgnoreCase);
-        Assert.Contains("Lens to page: 8.3 cm (3.3 inches)", text, StringComparison.Ordinal);
-        Assert.Contains("Eye to lens: 25 cm (9.8 inches)", text, StringComparison.Ordinal);   // 25 / 2.54 = 9.84
-        foreach (var caution in HandoutWording.Cautions)
+        // DEMO-01 reads 4M at 40 cm: with the fluent reserve 2:1 (methods.md §2.3) she needs 8M, 8 × 1.4544 /
+        // (0.35278 × 0.496) = 66 pt (derived, methods.md §1.3), more than paper holds: the short version at 48 pt,
+        // distances in the clinic's unit only and the two safety lines for a lens (docs/reports.md).
+        Assert.Contains("Lens to page: 8.3 cm", text, StringComparison.Ordinal);
+        Assert.Contains("Eye to lens: 25 cm", text, StringComparison.Ordinal);
+        HandoutDevice lens = new(LitMagnifier, "", "", [], [], HasLightOrBattery: true, Kind: Optics.Options.OptionKind.HandMagnifier);
+        foreach (var caution in HandoutWording.ShortCautionsFor([lens]))
         {
             Assert.Contains(Spaces().Replace(caution, " "), text, StringComparison.Ordinal);
         }
@@ -75,6 +79,7 @@ public sealed partial class PlanHandoutDownloadTests(BrowserSession browser, App
         await Assertions.Expect(Page.GetByRole(AriaRole.Alert)).ToContainTextAsync(ReportMessages.NoChosenOption);
 
         await plan.GotoAsync(3);
+        await plan.OpenAsync("(HM-20L)");
         await plan.Choose("(HM-20L)").First.ClickAsync();
         await Assertions.Expect(plan.Option("(HM-20L)").First).ToContainTextAsync("Chosen for the handout.");
         var download = await Page.RunAndWaitForDownloadAsync(() => plan.HandoutLink.ClickAsync());

@@ -135,4 +135,105 @@ public class ClinicianSummaryRendererTests
         Assert.Equal(ReportMessages.NoMethodVersion, noVersion.Error);
         Assert.True(noVersion.Content.IsEmpty);
     }
+
+    // An invented record with every part the summary can hold (inputs only; the checks below are cited or derived).
+    private static ClinicianSummary Full() => SampleModels.Summary() with
+    {
+        Inputs = [new SummaryInput("Target print", "1.0M (newsprint)"), new SummaryInput("Task", "Reading medicine labels")],
+        Eyes =
+        [
+            new EyeAcuity("Right eye", "6/60", Acuity.FromSnellen(6, 60)),
+            new EyeAcuity("Left eye", "CF at 1 m", null),
+        ],
+        Near = new NearAcuityRecord("3.2M at 25 cm", PrintSize.FromM(3.2), Distance.FromCentimetres(25)),
+        ReadingCurve = new ReadingCurveRecord(
+            Distance.FromCentimetres(25),
+            [
+                new(PrintSize.FromM(8), 118), new(PrintSize.FromM(6.3), 121), new(PrintSize.FromM(5), 119),
+                new(PrintSize.FromM(4), 112), new(PrintSize.FromM(3.2), 84), new(PrintSize.FromM(2.5), 41),
+            ],
+            PrintSize.FromM(4),
+            120),
+        Estimates =
+        [
+            new MethodEstimate("Kestenbaum", Power.FromDioptres(10), "Distance acuity 6/60"),
+            new MethodEstimate("Near threshold with reserve", Power.FromDioptres(25.6), "3.2M at 25 cm, target 1.0M", Reserve: AcuityReserve.Fluent),
+            new MethodEstimate("Critical print size", Power.FromDioptres(16), "Critical print size 4.0M at 25 cm, target 1.0M"),
+        ],
+        ChosenOptions =
+        [
+            SampleModels.Summary().ChosenOptions[0] with
+            {
+                Task = "Reading medicine labels",
+                WeighedReasons = [new OptionReason("Gives the power needed with the 2:1 reserve.", true), new OptionReason("Short working distance of 8 cm.", false)],
+            },
+        ],
+    };
+
+    [Fact]
+    public void Prints_each_eyes_acuity_as_typed_and_as_read_and_the_near_acuity()
+    {
+        var text = Read(Full());
+
+        // 6/60: logMAR = log10(60/6) = 1.00 (methods.md §1.1, derived).
+        Assert.True(text.Contains("Right eye (distance) 6/60 logMAR 1.00"), text.Words);
+        Assert.True(text.Contains("Left eye (distance) CF at 1 m not a chart acuity"), text.Words);
+        // 3.2M at 25 cm: logMAR = log10(3.2/0.25) = 1.11 (Colenbrander; methods.md §1.2, derived).
+        Assert.True(text.ContainsInCell("3.2M at 25 cm 3.2M at 25.0 cm (9.8 in), logMAR 1.11"), text.Words);
+    }
+
+    [Fact]
+    public void Prints_the_reading_curve_results_points_and_a_described_plot()
+    {
+        var model = Full();
+        var result = Renderer.Render(model);
+        var text = PdfText.Read(result.Content);
+        var tags = PdfTags.Read(result.Content);
+
+        // 4.0M at 25 cm: logMAR = log10(4/0.25) = 1.20 (methods.md §1.2, derived).
+        Assert.True(text.ContainsInCell("Critical print size 4.0M at 25.0 cm (9.8 in) (logMAR 1.20); maximum reading speed 120 words a minute."), text.Words);
+        Assert.True(text.Contains("8.0M 1.51 118"), text.Words); // log10(8/0.25) = 1.505
+        Assert.Contains(tags.Elements, e => e.Type == "Figure" && e.Alt is { } alt && alt.Contains("maximum reading speed 120", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Prints_each_estimate_with_its_reserve_and_the_reasons_labelled_for_or_against()
+    {
+        var text = Read(Full());
+
+        Assert.True(text.Contains("+25.60 D 3.9 cm 2:1"), text.Words); // EVD = 1/25.6 D = 3.9 cm
+        Assert.True(text.Contains("Kestenbaum +10.00 D 10.0 cm none"), text.Words);
+        Assert.True(text.Contains("For: Gives the power needed with the 2:1 reserve."), text.Words);
+        Assert.True(text.Contains("Against: Short working distance of 8 cm."), text.Words);
+        Assert.True(text.Contains("Hand magnifier with a light, +12 D (for Reading medicine labels)"), text.Words);
+    }
+
+    [Fact]
+    public void Is_tagged_with_language_title_headings_and_tables_with_header_cells()
+    {
+        var tags = PdfTags.Read(Renderer.Render(Full()).Content);
+
+        Assert.True(tags.Marked);
+        Assert.Equal("en", tags.Language);
+        Assert.True(tags.DisplaysTitle);
+        Assert.Equal("Clinician summary, client HX-0042", tags.Title);
+        Assert.Equal("H1", tags.Elements.First(e => e.Type.StartsWith('H')).Type);
+        foreach (var type in new[] { "H2", "Table", "TR", "TH", "TD", "L", "LI" })
+            Assert.Contains(type, tags.Types);
+    }
+
+    [Fact]
+    public void The_last_page_is_never_a_page_of_a_few_lines()
+    {
+        var model = Full();
+        foreach (var options in new[] { 1, 2, 3, 4 })
+        {
+            var many = Enumerable.Range(1, options).Select(i => model.ChosenOptions[0] with { Name = "Option " + i.ToString(CultureInfo.InvariantCulture) }).ToList();
+            var result = Renderer.Render(model with { ChosenOptions = many });
+            Preview.Write("summary-" + options.ToString(CultureInfo.InvariantCulture), result.Content);
+            var text = PdfText.Read(result.Content);
+            if (text.PageCount > 1)
+                Assert.True(text.LastPageUsed >= 0.2, $"{options} options: the last page's text reaches only {text.LastPageUsed:P0} down the page");
+        }
+    }
 }

@@ -17,6 +17,14 @@ namespace LowVisionAid.Reports.Summaries;
 /// <param name="MethodVersion">The version of the methods that produced the figures, e.g. "methods 2027.1".</param>
 /// <param name="Paper">A4 or Letter.</param>
 /// <param name="FigureTables">The trade-off figures' data tables to print with the record (from <see cref="Figures.TradeOffFigures"/>), or null.</param>
+/// <param name="Eyes">Distance acuity of each eye (and both) as typed and as read, or null.</param>
+/// <param name="Near">Near acuity as typed and as read, or null.</param>
+/// <param name="ReadingCurve">The reading-speed curve and its results, or null when none was measured.</param>
+/// <param name="HandoutReader">
+/// The print the client reads comfortably, as the handout is given it; with <paramref name="HandoutMinimumPoints"/> the
+/// summary says what size the handout is printed at and, for very large print, that other forms should be offered.
+/// </param>
+/// <param name="HandoutMinimumPoints">The clinic's smallest handout body size in points.</param>
 public sealed record ClinicianSummary(
     ClinicContact Clinic,
     string ClientCode,
@@ -29,7 +37,47 @@ public sealed record ClinicianSummary(
     IReadOnlyList<TrialRecord> Trials,
     string MethodVersion,
     PaperSize Paper = PaperSize.A4,
-    IReadOnlyList<Figures.FigureTable>? FigureTables = null);
+    IReadOnlyList<Figures.FigureTable>? FigureTables = null,
+    IReadOnlyList<EyeAcuity>? Eyes = null,
+    NearAcuityRecord? Near = null,
+    ReadingCurveRecord? ReadingCurve = null,
+    Handouts.HandoutReader? HandoutReader = null,
+    double HandoutMinimumPoints = Handouts.ClientHandout.DefaultBodyPoints);
+
+/// <summary>One eye's distance acuity as the clinician typed it and as the plan read it.</summary>
+/// <param name="Eye">Which eye, in words: "Right eye", "Left eye", "Both eyes".</param>
+/// <param name="AsTyped">The entry exactly as typed, e.g. "6/60" or "CF at 1 m".</param>
+/// <param name="AsRead">The acuity the plan understood, or null when the entry was not a chart acuity.</param>
+public sealed record EyeAcuity(string Eye, string AsTyped, Acuity? AsRead);
+
+/// <summary>Near acuity as typed and as read.</summary>
+/// <param name="AsTyped">The entry exactly as typed, e.g. "N24 at 25 cm".</param>
+/// <param name="Threshold">The smallest print read, in M.</param>
+/// <param name="TestDistance">The distance it was read at.</param>
+public sealed record NearAcuityRecord(string AsTyped, PrintSize Threshold, Distance TestDistance);
+
+/// <summary>A measured reading-speed curve (MNREAD style, methods.md §2.5) and what the plan read from it.</summary>
+/// <param name="TestDistance">The distance the sentences were read at.</param>
+/// <param name="Points">Each print size read and its speed.</param>
+/// <param name="CriticalPrint">The critical print size, or null when the curve gave none.</param>
+/// <param name="MaximumReadingSpeed">The maximum reading speed in words a minute, or null.</param>
+/// <param name="Refusal">Why the curve gave no result, or null.</param>
+public sealed record ReadingCurveRecord(
+    Distance TestDistance,
+    IReadOnlyList<ReadingCurvePoint> Points,
+    PrintSize? CriticalPrint,
+    double? MaximumReadingSpeed,
+    string? Refusal = null);
+
+/// <summary>One sentence of a reading-speed test.</summary>
+/// <param name="Print">Its print size.</param>
+/// <param name="WordsPerMinute">The speed read.</param>
+public sealed record ReadingCurvePoint(PrintSize Print, double WordsPerMinute);
+
+/// <summary>A reason for or against an option's place in the plan.</summary>
+/// <param name="Text">The reason in words.</param>
+/// <param name="For">True when it counts for the option, false when against.</param>
+public sealed record OptionReason(string Text, bool For);
 
 /// <summary>One input as the record shows it, e.g. "Distance acuity" and "6/60 (logMAR 1.00)".</summary>
 /// <param name="Label">What was measured or chosen.</param>
@@ -41,7 +89,8 @@ public sealed record SummaryInput(string Label, string Value);
 /// <param name="EquivalentPower">The estimate, or null when the method could not be applied.</param>
 /// <param name="Basis">What the estimate rests on, or why it is missing.</param>
 /// <param name="DisagreesWithOthers">True when the plan flags it as more than 0.2 log units from another estimate.</param>
-public sealed record MethodEstimate(string Method, Power? EquivalentPower, string Basis, bool DisagreesWithOthers = false);
+/// <param name="Reserve">The acuity reserve the estimate used, or null when it used none (the critical print size holds its own).</param>
+public sealed record MethodEstimate(string Method, Power? EquivalentPower, string Basis, bool DisagreesWithOthers = false, AcuityReserve? Reserve = null);
 
 /// <summary>A chosen device option with every figure the plan worked out for it and the reasons for it.</summary>
 /// <param name="Name">The option's name.</param>
@@ -53,6 +102,8 @@ public sealed record MethodEstimate(string Method, Power? EquivalentPower, strin
 /// <param name="OtherFigures">Every other figure, already formatted.</param>
 /// <param name="Reasons">Why it was chosen.</param>
 /// <param name="Cautions">Cautions that apply to it.</param>
+/// <param name="WeighedReasons">Its reasons labelled for or against; printed instead of <paramref name="Reasons"/> when given.</param>
+/// <param name="Task">The task it was chosen for, or null.</param>
 public sealed record ChosenOption(
     string Name,
     string Kind,
@@ -62,7 +113,9 @@ public sealed record ChosenOption(
     int? LettersInView,
     IReadOnlyList<OptionFigure> OtherFigures,
     IReadOnlyList<string> Reasons,
-    IReadOnlyList<string> Cautions);
+    IReadOnlyList<string> Cautions,
+    IReadOnlyList<OptionReason>? WeighedReasons = null,
+    string? Task = null);
 
 /// <summary>A figure of an option, already formatted, e.g. "Depth of field" and "5.6 mm".</summary>
 /// <param name="Label">What the figure is.</param>

@@ -3,6 +3,7 @@ using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Pdf;
 using PdfSharp.Drawing;
+using PdfSharp.UniversalAccessibility;
 
 namespace LowVisionAid.Reports.Summaries;
 
@@ -23,6 +24,9 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
     private const double Margin = 50;
     private readonly IFormatProvider _culture = formatProvider ?? CultureInfo.InvariantCulture;
 
+    // A last page less full than this is laid out again with tighter gaps between blocks.
+    private const double NearlyEmpty = 0.2;
+
     /// <inheritdoc/>
     public ReportResult Render(ClinicianSummary model)
     {
@@ -31,40 +35,53 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
             return ReportResult.Fail(error);
 
         HyperlegibleFont.EnsureRegistered();
-        using var document = PdfOutput.Create("Clinician summary, client " + model.ClientCode, model.Clinic.Name, model.AssessedOn);
+        // Laid out to count the pages (and see how full the last is), then again with the count in the footers.
+        var (spacing, pages) = PageFlow.ChooseSpacing(gaps => Layout(model, gaps, null).Count, NearlyEmpty);
+        var pdf = Layout(model, spacing, pages).Pdf;
+        return ReportResult.Ok(pdf, FileNames.For("summary", model.ClientCode));
+    }
 
+    private ((byte[] Bytes, int Pages) Pdf, (int Pages, double LastFill) Count) Layout(ClinicianSummary model, double spacing, int? pageCount)
+    {
+        using var document = PdfOutput.Create("Clinician summary, client " + model.ClientCode, model.Clinic.Name, model.AssessedOn);
         const double Line = BodyPoints * 1.35;
         var regular = new XFont(HyperlegibleFont.FamilyName, BodyPoints, XFontStyleEx.Regular);
         var bold = new XFont(HyperlegibleFont.FamilyName, BodyPoints, XFontStyleEx.Bold);
         var heading = new XFont(HyperlegibleFont.FamilyName, 13, XFontStyleEx.Bold);
         var title = new XFont(HyperlegibleFont.FamilyName, 17, XFontStyleEx.Bold);
+        (int, double) count;
 
-        using (var flow = new PageFlow(document, model.Paper, Margin, footerHeight: BodyPoints * 3))
+        using (var flow = new PageFlow(document, model.Paper, Margin, BodyPoints * 3, "Clinician summary, client " + model.ClientCode + "  ·  " + model.MethodVersion, regular, pageCount))
         {
-            void Heading(string text)
+            void Heading(string text, PdfBlockLevelElementTag level = PdfBlockLevelElementTag.Heading2)
             {
-                flow.Space(Line * 0.8);
-                flow.KeepTogether(heading.Size * 1.4 + (Line * 3));
-                flow.Paragraph(text, heading, heading.Size * 1.4);
+                flow.Space(Line * 0.8 * spacing);
+                flow.Paragraph(text, level == PdfBlockLevelElementTag.Heading2 ? heading : bold, heading.Size * 1.4, tag: level, keepWithNext: Line * 3);
             }
 
             void Table(double[] columns, string[] header, IEnumerable<string[]> rows)
             {
-                flow.Row(header, columns, bold, Line, rule: true);
+                flow.Begin(PdfBlockLevelElementTag.Table);
+                flow.Row(header, columns, bold, Line, header: true, keepWithNext: Line * 2);
                 foreach (var row in rows)
-                    flow.Row(row, columns, regular, Line, rule: false);
+                    flow.Row(row, columns, regular, Line, header: false);
+                flow.End();
             }
 
             void Bullets(string label, IReadOnlyList<string> items)
             {
                 if (items.Count == 0)
                     return;
-                flow.Paragraph(label, bold, Line);
+                flow.Paragraph(label, bold, Line, tag: PdfBlockLevelElementTag.Heading4, keepWithNext: keepWithHeight(items[0]));
+                flow.Begin(PdfBlockLevelElementTag.List);
                 foreach (var item in items)
                     flow.Paragraph(item, regular, Line, indent: BodyPoints * 1.5, marker: "•");
+                flow.End();
             }
 
-            flow.Paragraph("Magnifier plan: clinician summary", title, title.Size * 1.3);
+            double keepWithHeight(string text) => flow.Height(text, regular, Line, BodyPoints * 1.5, whole: true);
+
+            flow.Paragraph("Magnifier plan: clinician summary", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
             flow.Paragraph(string.Join("  ·  ", new[] { model.Clinic.Name, model.Clinic.Phone, model.Clinic.Email, model.Clinic.Address }
                 .Where(s => !string.IsNullOrWhiteSpace(s))), regular, Line);
             flow.Space(Line * 0.3);
@@ -76,28 +93,59 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                 ["Method version", model.MethodVersion],
             ]);
 
-            Heading("Inputs");
-            Table([0.35, 0.65], ["Input", "Value"], model.Inputs.Select(i => new[] { i.Label, i.Value }));
+            if (model.Eyes is { Count: > 0 } || model.Near is not null)
+            {
+                Heading("Acuity");
+                var rows = (model.Eyes ?? []).Select(e => new[] { e.Eye + " (distance)", e.AsTyped, e.AsRead is { } a ? "logMAR " + a.LogMar.ToString("0.00", _culture) : "not a chart acuity" }).ToList();
+                if (model.Near is { } near)
+                {
+                    rows.Add(["Near (smallest print read)", near.AsTyped,
+                        near.Threshold.ToString(null, _culture) + " at " + Length(near.TestDistance) + ", logMAR " + near.Threshold.LogMarAt(near.TestDistance).ToString("0.00", _culture)]);
+                }
+
+                Table([0.3, 0.3, 0.4], ["Measured", "As typed", "As read"], rows);
+            }
+
+            if (model.ReadingCurve is { } curve)
+                ReadingCurve(flow, curve, Heading, Table, regular, Line);
+
+            if (model.Inputs.Count > 0)
+            {
+                Heading("Other inputs");
+                Table([0.35, 0.65], ["Input", "Value"], model.Inputs.Select(i => new[] { i.Label, i.Value }));
+            }
 
             Heading("Equivalent power by method");
-            Table([0.26, 0.15, 0.14, 0.45], ["Method", "Power", "EVD", "Basis"], model.Estimates.Select(e => new[]
+            Table([0.22, 0.15, 0.12, 0.11, 0.40], ["Method", "Power", "EVD", "Reserve", "Basis"], model.Estimates.Select(e => new[]
             {
                 e.Method,
                 e.EquivalentPower is { } p ? p.ToString(null, _culture) : "not available",
                 e.EquivalentPower is { Dioptres: > 0 } q ? q.FocalLength.ToString(null, _culture) : "–",
+                e.Reserve is { } r ? r.ToString(null, _culture) : "none",
                 e.DisagreesWithOthers ? e.Basis + ". Differs from another estimate by more than 0.2 log units." : e.Basis,
             }));
 
             Heading(model.ChosenOptions.Count == 1 ? "Chosen option" : "Chosen options");
             foreach (var option in model.ChosenOptions)
             {
-                flow.Space(Line * 0.4);
-                flow.KeepTogether(Line * 4);
-                flow.Paragraph(option.Name, bold, Line);
+                flow.Space(Line * 0.4 * spacing);
+                flow.Paragraph(option.Task is null ? option.Name : option.Name + " (for " + option.Task + ")", bold, Line,
+                    tag: PdfBlockLevelElementTag.Heading3, keepWithNext: Line * 4);
                 Table([0.35, 0.65], ["Figure", "Value"], Figures(option).Select(f => new[] { f.Label, f.Value }));
-                flow.Space(Line * 0.3);
-                Bullets("Reasons", option.Reasons);
+                flow.Space(Line * 0.3 * spacing);
+                Bullets("Reasons", option.WeighedReasons is { Count: > 0 } weighed
+                    ? [.. weighed.Select(r => (r.For ? "For: " : "Against: ") + r.Text)]
+                    : option.Reasons);
                 Bullets("Cautions", option.Cautions);
+            }
+
+            // What the client takes home, and what to offer besides when the print is very large.
+            if (model.HandoutReader is not null)
+            {
+                var fit = Handouts.HandoutPrint.Fit(model.HandoutReader, model.HandoutMinimumPoints, _culture);
+                Heading("Client handout");
+                flow.Paragraph(fit.ClinicianNote ?? string.Create(_culture,
+                    $"Printed at {fit.BodyPoints:0} pt, at least the print the client needs ({(fit.Needed is { } m ? m.M.ToString("0.#", _culture) + "M, " : string.Empty)}{fit.NeededPoints ?? fit.BodyPoints:0} pt) and the clinic's smallest size."), regular, Line);
             }
 
             Heading("Trials and outcomes");
@@ -118,12 +166,76 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
                 Table(columns, [.. figure.Columns], figure.Rows.Select(r => Enumerable.Range(0, figure.Columns.Count).Select(c => c < r.Count ? r[c] : string.Empty).ToArray()));
             }
 
-            flow.Space(Line);
+            flow.Space(Line * spacing);
             flow.Paragraph(StartingPointNote, regular, Line);
-            flow.Finish("Clinician summary, client " + model.ClientCode + "  ·  " + model.MethodVersion, regular);
+            count = (flow.PageCount, flow.LastPageFill);
         }
 
-        return ReportResult.Ok(PdfOutput.Save(document), FileNames.For("summary", model.ClientCode));
+        return (pageCount is null ? default : PdfOutput.Save(document), count);
+    }
+
+    // The reading curve: its results in words, the points as a table, and a small plot of speed against print size
+    // (log scale, as the MNREAD chart steps in 0.1 log units; methods.md §2.5) with the critical print size marked.
+    private void ReadingCurve(PageFlow flow, ReadingCurveRecord curve, Action<string, PdfBlockLevelElementTag> heading,
+        Action<double[], string[], IEnumerable<string[]>> table, XFont regular, double line)
+    {
+        heading("Reading curve", PdfBlockLevelElementTag.Heading2);
+        var points = curve.Points.Where(p => p.Print.IsValid && p.WordsPerMinute >= 0).OrderByDescending(p => p.Print.M).ToList();
+        string result = curve.CriticalPrint is { } cps && curve.MaximumReadingSpeed is { } mrs
+            ? "Critical print size " + cps.ToString(null, _culture) + " at " + Length(curve.TestDistance) + " (logMAR "
+                + cps.LogMarAt(curve.TestDistance).ToString("0.00", _culture) + "); maximum reading speed "
+                + mrs.ToString("0", _culture) + " words a minute."
+            : "No critical print size: " + (curve.Refusal ?? "the curve did not level off.");
+        flow.Paragraph(result, regular, line);
+        if (points.Count < 2)
+            return;
+
+        flow.Space(line * 0.3);
+        var small = new XFont(HyperlegibleFont.FamilyName, 8.5, XFontStyleEx.Regular);
+        flow.Figure(150, "Reading speed against print size. " + result, (g, area) => Plot(g, area, points, curve, small));
+        flow.Space(line * 0.3);
+        table([0.3, 0.3, 0.4], ["Print size", "logMAR at " + Length(curve.TestDistance), "Words a minute"], points.Select(p => new[]
+        {
+            p.Print.ToString(null, _culture), p.Print.LogMarAt(curve.TestDistance).ToString("0.00", _culture), p.WordsPerMinute.ToString("0", _culture),
+        }));
+    }
+
+    private void Plot(XGraphics g, XRect area, List<ReadingCurvePoint> points, ReadingCurveRecord curve, XFont font)
+    {
+        const double AxisLeft = 46, AxisBottom = 26, PlotWidth = 300;
+        double x0 = area.Left + AxisLeft, y0 = area.Bottom - AxisBottom, height = area.Height - AxisBottom - 8;
+        double logMin = points.Min(p => Math.Log10(p.Print.M)), logMax = points.Max(p => Math.Log10(p.Print.M));
+        if (logMax - logMin < 0.1)
+            logMax = logMin + 0.1;
+        double speedMax = Math.Max(10, Math.Ceiling(points.Max(p => p.WordsPerMinute) / 50) * 50);
+        double X(PrintSize m) => x0 + ((Math.Log10(m.M) - logMin) / (logMax - logMin) * PlotWidth);
+        double Y(double wpm) => y0 - (wpm / speedMax * height);
+        var axis = new XPen(XColors.Black, 0.75);
+        g.DrawLine(axis, x0, y0, x0 + PlotWidth, y0);
+        g.DrawLine(axis, x0, y0, x0, y0 - height);
+        g.DrawString("0", font, XBrushes.Black, x0 - 12, y0 + 3);
+        g.DrawString(speedMax.ToString("0", _culture), font, XBrushes.Black, area.Left, Y(speedMax) + 3);
+        g.DrawString("words a minute", font, XBrushes.Black, x0 + 4, Y(speedMax) - 2);
+        g.DrawString(points[^1].Print.ToString(null, _culture), font, XBrushes.Black, X(points[^1].Print) - 8, y0 + 12);
+        g.DrawString(points[0].Print.ToString(null, _culture), font, XBrushes.Black, X(points[0].Print) - 12, y0 + 12);
+        g.DrawString("print size (log scale)", font, XBrushes.Black, x0 + (PlotWidth / 2) - 35, y0 + 22);
+        var line = new XPen(XColors.Black, 1.25);
+        for (int i = 1; i < points.Count; i++)
+            g.DrawLine(line, X(points[i - 1].Print), Y(points[i - 1].WordsPerMinute), X(points[i].Print), Y(points[i].WordsPerMinute));
+        foreach (var p in points)
+            g.DrawEllipse(XBrushes.Black, X(p.Print) - 2.5, Y(p.WordsPerMinute) - 2.5, 5, 5);
+        if (curve.CriticalPrint is { } cps && cps.M >= points[^1].Print.M && cps.M <= points[0].Print.M)
+        {
+            var dashed = new XPen(XColors.Black, 1) { DashStyle = XDashStyle.Dash };
+            g.DrawLine(dashed, X(cps), y0, X(cps), y0 - height);
+            g.DrawString("critical print size " + cps.ToString(null, _culture), font, XBrushes.Black, X(cps) + 3, y0 - height + 8);
+        }
+
+        if (curve.MaximumReadingSpeed is { } mrs)
+        {
+            var dotted = new XPen(XColors.Black, 0.75) { DashStyle = XDashStyle.Dot };
+            g.DrawLine(dotted, x0, Y(mrs), x0 + PlotWidth, Y(mrs));
+        }
     }
 
     private static string? Validate(ClinicianSummary model)

@@ -1,9 +1,11 @@
-using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Requirement;
 
 namespace LowVisionAid.Web.Calculator;
 
-/// <summary>The quick calculator's labels and messages, in one place (the page and the API share them).</summary>
+/// <summary>
+/// The quick calculator's field labels and messages (the page and the API share them). Names of methods and classes of
+/// option are <see cref="Plans.PlanText"/>'s, the same as on the plan page.
+/// </summary>
 public static class CalculatorText
 {
     public const string DistanceAcuityLabel = "Distance acuity";
@@ -23,32 +25,8 @@ public static class CalculatorText
     public const string DistanceTaskDetailNote = "No print size was given: 1M is used only to count letters in view. The telescope's power comes from the two acuities.";
 
     public static string BasisEstimate(PowerMethod method, double dioptres, IFormatProvider provider) =>
-        string.Create(provider, $"The options are worked out for {dioptres:0.00} D, the estimate of the {MethodName(method)}.");
+        string.Create(provider, $"The options are worked out for {dioptres:0.00} D, from the {Plans.PlanText.Method(method)} estimate.");
 
     public static string BasisDistanceTask(double dioptres, IFormatProvider provider) =>
         string.Create(provider, $"The options are worked out for {dioptres:0.00} D, from the ratio of the present acuity to the acuity wanted, at the viewing distance.");
-
-    public static string MethodName(PowerMethod method) => method switch
-    {
-        PowerMethod.KestenbaumClassic => "Kestenbaum's rule as published (1M at threshold, no reserve)",
-        PowerMethod.KestenbaumWithReserve => "Kestenbaum's rule, for the target print and reserve",
-        PowerMethod.NearAcuity => "near-acuity method (equivalent viewing distance)",
-        PowerMethod.CriticalPrintSize => "reading-curve method (critical print size)",
-        _ => method.ToString(),
-    };
-
-    public static string OptionName(OptionKind kind) => kind switch
-    {
-        OptionKind.MovingCloser => "Moving closer",
-        OptionKind.LargePrint => "Large print",
-        OptionKind.SpectacleAdd => "Reading spectacles with a high add",
-        OptionKind.HandMagnifier => "Hand magnifier",
-        OptionKind.StandMagnifier => "Stand magnifier",
-        OptionKind.NearTelescope => "Near telescope (telemicroscope)",
-        OptionKind.VideoMagnifier => "Video magnifier",
-        OptionKind.DistanceTelescope => "Hand-held distance telescope",
-        OptionKind.SpectacleTelescope => "Spectacle-mounted distance telescope",
-        OptionKind.ScreenMagnification => "Screen zoom or text size (built in)",
-        _ => kind.ToString(),
-    };
 }

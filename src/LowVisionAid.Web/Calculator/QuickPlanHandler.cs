@@ -122,11 +122,11 @@ public sealed class QuickPlanHandler
             understood,
             comparison is null ? [] : [.. comparison.Estimates.Select(e => View(e, provider))],
             comparison is null ? [] : [.. comparison.Disagreements.Select(d => new DisagreementView(
-                CalculatorText.MethodName(d.Lower.Method), CalculatorText.MethodName(d.Higher.Method), d.DifferenceLogUnits, d.PowerRatio))],
+                Plans.PlanText.Method(d.Lower.Method), Plans.PlanText.Method(d.Higher.Method), d.DifferenceLogUnits, d.PowerRatio))],
             result.RequiredPower.Dioptres,
             basis,
             [.. result.Options.Select(o => View(o, provider))],
-            [.. result.NotConsidered.Select(n => new NotConsideredView(n.Kind.ToString(), CalculatorText.OptionName(n.Kind), n.Reason))],
+            [.. result.NotConsidered.Select(n => new NotConsideredView(n.Kind.ToString(), Plans.PlanText.Kind(n.Kind), n.Reason))],
             [.. result.Cautions.Select(c => new CautionView(c.Id, c.Text))])
         {
             ReserveUsed = result.Reserve?.Reserve.ToString(null, provider),
@@ -241,7 +241,7 @@ public sealed class QuickPlanHandler
 
     private static EstimateView View(PowerEstimate e, IFormatProvider provider) => new(
         e.Method.ToString(),
-        CalculatorText.MethodName(e.Method),
+        Plans.PlanText.Method(e.Method),
         e.EquivalentPower.Dioptres,
         e.EquivalentViewingDistance.Centimetres,
         e.Magnification,
@@ -257,7 +257,7 @@ public sealed class QuickPlanHandler
         {
             Position = ranked.Position,
             Kind = o.Kind.ToString(),
-            Name = CalculatorText.OptionName(o.Kind),
+            Name = Plans.PlanText.Kind(o.Kind),
             Summary = o.Summary(provider),
             IsApplicable = o.IsApplicable,
             NotApplicableBecause = o.NotApplicableBecause,

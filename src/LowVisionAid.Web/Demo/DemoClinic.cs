@@ -3,7 +3,7 @@ using LowVisionAid.Data.Entities;
 using LowVisionAid.Optics.Planning;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using LowVisionAid.Optics.Quantities;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Demo;
@@ -12,7 +12,7 @@ namespace LowVisionAid.Web.Demo;
 /// An invented clinic, so that a newcomer lands in a working app. Every person and figure here is made up;
 /// the records are marked as demo and Settings removes them.
 /// </summary>
-public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanHandler makePlan, ChoosePlanOptionHandler choose)
+public sealed class DemoClinic(ClinicDbContext db, Infrastructure.ClinicCalendar calendar, MakePlanHandler makePlan, ChoosePlanOptionHandler choose)
 {
     public const string ClinicName = "Harbour Lane Low Vision Clinic (demo)";
 
@@ -24,7 +24,7 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
             return false;
         }
 
-        var today = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        var today = calendar.Today;
         db.Settings.Add(DefaultSettings(ClinicName, hasDemoData: true));
         db.KitDevices.AddRange(Kit());
         db.Clients.AddRange(Clients(today));
@@ -80,8 +80,8 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
             }
 
             var outputs = await db.Plans.Where(x => x.Id == planIds[p]).Select(x => x.OutputsJson).SingleAsync(ct).ConfigureAwait(false);
-            var snapshot = PlanJson.Read<PlanSnapshot>(outputs);
-            for (var g = 0; g < snapshot.Goals.Count; g++)
+            var snapshot = PlanJson.Read<TypedPlan>(outputs);
+            for (var g = 0; g < snapshot.Goals.Length; g++)
             {
                 if (DemoChoice(snapshot.Goals[g], g, preferKit: p == 0 ? "HM-12L" : null) is { } choice)
                 {
@@ -91,21 +91,21 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
         }
     }
 
-    private static PlanOptionRef? DemoChoice(GoalPlan goal, int g, string? preferKit)
+    private static PlanOptionRef? DemoChoice(PlannedGoal goal, int g, string? preferKit)
     {
         var kit = goal.KitDevices.Select((o, i) => (o, i)).ToList();
-        if (preferKit is not null && kit.FindIndex(x => x.o.KitCode == preferKit) is var k and >= 0)
+        if (preferKit is not null && kit.FindIndex(x => x.o.Option.KitDeviceId == preferKit) is var k and >= 0)
         {
             return new PlanOptionRef(g, PlanOptionList.KitDevices, k);
         }
 
-        if (kit.FindIndex(x => x.o.Usable) is var usableKit and >= 0)
+        if (kit.FindIndex(x => OptionUse.IsUsable(x.o.Option)) is var usableKit and >= 0)
         {
             return new PlanOptionRef(g, PlanOptionList.KitDevices, usableKit);
         }
 
         var options = goal.Options.Select((o, i) => (o, i)).ToList();
-        return options.FindIndex(x => x.o.Usable) is var usable and >= 0 ? new PlanOptionRef(g, PlanOptionList.Options, usable) : null;
+        return options.FindIndex(x => OptionUse.IsUsable(x.o.Option)) is var usable and >= 0 ? new PlanOptionRef(g, PlanOptionList.Options, usable) : null;
     }
 
     /// <summary>Removes every demo record and gives the clinic a neutral name until the user sets its own.</summary>
@@ -177,7 +177,7 @@ public sealed class DemoClinic(ClinicDbContext db, TimeProvider clock, MakePlanH
         var first = new Client { Code = "DEMO-01", Name = "Ines Example", YearOfBirth = 1941, Notes = "Invented demo client. Dry macular degeneration, both eyes.", IsDemo = true };
         first.Visits.Add(Visit(today.AddDays(-21), "Demo practitioner A", ("6/60", Acuity.FromSnellen(6, 60)), ("6/48", Acuity.FromSnellen(6, 48)), ("6/48", Acuity.FromSnellen(6, 48)),
             ("4M", PrintSize.FromM(4)), ("40 cm", Distance.FromCentimetres(40)), "+2.50", 2.5, "1.20 logCS", 1.2, "25 cm", 25,
-            (GoalTask.Newspaper, "Local weekly paper", "1M", 1.0), (GoalTask.MedicationLabels, null, "0.8M", 0.8)));
+            (GoalTask.Newspaper, "Local weekly paper", "1M", 1.0), (GoalTask.MedicationLabels, null, "0.8M", 0.8), (GoalTask.Mail, "Bills", "1M", 1.0)));
 
         var second = new Client { Code = "DEMO-02", YearOfBirth = 1958, Notes = "Invented demo client. Recorded without a name, as the clinic allows.", IsDemo = true };
         second.Visits.Add(Visit(today.AddDays(-7), "Demo practitioner B", ("20/200", Acuity.FromSnellen(20, 200)), ("20/400", Acuity.FromSnellen(20, 400)), ("20/200", Acuity.FromSnellen(20, 200)),

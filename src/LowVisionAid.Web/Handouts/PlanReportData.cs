@@ -1,6 +1,7 @@
 using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports;
+using LowVisionAid.Reports.Handouts;
 using LowVisionAid.Reports.Summaries;
 
 namespace LowVisionAid.Web.Handouts;
@@ -26,7 +27,11 @@ public sealed record PlanReportData(
     IReadOnlyList<MethodEstimate> Estimates,
     IReadOnlyList<ReportOption> Chosen,
     IReadOnlyList<string> PlanCautions,
-    IReadOnlyList<TrialRecord> Trials)
+    IReadOnlyList<TrialRecord> Trials,
+    HandoutReader? Reader = null,
+    IReadOnlyList<EyeAcuity>? Eyes = null,
+    NearAcuityRecord? Near = null,
+    ReadingCurveRecord? ReadingCurve = null)
 {
     /// <summary>True when at least one option was chosen (on the plan page, or by a trial that ended dispensed, loaned or ordered).</summary>
     public bool HasChosenOption => Chosen.Count > 0;
@@ -51,6 +56,11 @@ public sealed record PlanReportData(
 /// <param name="Reasons">The plan's reasons for its position.</param>
 /// <param name="Notes">The plan's notes on it (limits, fluency).</param>
 /// <param name="ChosenBy">How it came to be chosen.</param>
+/// <param name="Declined">True when its latest trial ended declined (the handout leaves it out and says so).</param>
+/// <param name="TrialTask">The task its trial was for (e.g. "letters and bills"), printed instead of the goal's task.</param>
+/// <param name="AddNeeded">The reading add to wear with it, or null for the distance glasses.</param>
+/// <param name="WeighedReasons">Its reasons labelled for or against, or null.</param>
+/// <param name="Screen">For screen magnification, the zoom and polarity the plan worked out; null otherwise.</param>
 public sealed record ReportOption(
     string Name,
     OptionKind Family,
@@ -69,7 +79,12 @@ public sealed record ReportOption(
     IReadOnlyList<OptionFigure> Figures,
     IReadOnlyList<string> Reasons,
     IReadOnlyList<string> Notes,
-    ChosenBy ChosenBy = ChosenBy.Clinician);
+    ChosenBy ChosenBy = ChosenBy.Clinician,
+    bool Declined = false,
+    string? TrialTask = null,
+    Power? AddNeeded = null,
+    IReadOnlyList<OptionReason>? WeighedReasons = null,
+    HandoutScreen? Screen = null);
 
 /// <summary>How an option came to be in the handout.</summary>
 public enum ChosenBy

@@ -31,12 +31,16 @@ public sealed class PlanReports(
         ArgumentNullException.ThrowIfNull(plan);
         var devices = plan.Chosen.Select(o => new HandoutDevice(
             o.Name,
-            HandoutTexts.WhatItIs(o.Family),
-            o.Task,
-            HandoutTexts.HowToUse(o.Family),
+            DeviceWording.WhatItIs(o.Family),
+            o.TrialTask ?? o.Task,
+            DeviceWording.HowToUse(o.Family, o.Screen),
             Distances(o),
             o.HasLightOrBattery,
-            o.Field is { } field && o.LettersInView is > 0 ? new HandoutView(field, o.LettersInView.Value, o.Target) : null)).ToList();
+            o.Field is { } field && o.LettersInView is > 0 ? new HandoutView(field, o.LettersInView.Value, o.Target) : null,
+            o.Family,
+            o.AddNeeded,
+            o.Declined,
+            o.Screen)).ToList();
         return new ClientHandout(
             plan.Clinic,
             plan.ClientCode,
@@ -46,11 +50,12 @@ public sealed class PlanReports(
             devices,
             HandoutTexts.Light,
             HandoutTexts.Practice,
-            HandoutTexts.Care,
+            [],
             HandoutTexts.IfItStopsHelping,
             plan.Chosen.Count > 0 ? plan.Chosen[0].Target : Optics.Quantities.PrintSize.FromM(1.0),
             plan.BodyPoints,
-            plan.Paper);
+            plan.Paper,
+            plan.Reader);
     }
 
     public ClinicianSummary Summary(PlanReportData plan)
@@ -65,7 +70,9 @@ public sealed class PlanReports(
             o.LettersInView,
             o.Figures,
             o.Reasons,
-            o.Notes)).ToList();
+            o.Notes,
+            o.WeighedReasons,
+            o.TrialTask ?? o.Task)).ToList();
         return new ClinicianSummary(
             plan.Clinic,
             plan.ClientCode,
@@ -78,7 +85,12 @@ public sealed class PlanReports(
             plan.Trials,
             plan.MethodVersion,
             plan.Paper,
-            plan.HasChosenOption ? [.. Figures(plan, "summary").Select(f => f.Table)] : null);
+            plan.HasChosenOption ? [.. Figures(plan, "summary").Select(f => f.Table)] : null,
+            plan.Eyes,
+            plan.Near,
+            plan.ReadingCurve,
+            plan.Reader,
+            plan.BodyPoints);
     }
 
     /// <summary>
@@ -110,10 +122,10 @@ public sealed class PlanReports(
 
     private static List<HandoutDistance> Distances(ReportOption o)
     {
-        var distances = new List<HandoutDistance> { new(HandoutTexts.DistanceWhat(o.Family), o.WorkingDistance) };
+        var distances = new List<HandoutDistance> { new(DeviceWording.DistanceWhat(o.Family), o.WorkingDistance) };
         if (o.EyeToLens is { } eye && o.Family is OptionKind.HandMagnifier or OptionKind.StandMagnifier)
         {
-            distances.Add(new(HandoutTexts.EyeToLens, eye));
+            distances.Add(new(DeviceWording.EyeToLens, eye));
         }
 
         return distances;

@@ -1,34 +1,31 @@
 using System.Globalization;
-using System.Text.Json;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
-using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
-using LowVisionAid.Optics.Requirement;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Fonts;
+using LowVisionAid.Reports.Handouts;
 using LowVisionAid.Reports.Summaries;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Infrastructure;
+using LowVisionAid.Web.Plans;
 using Microsoft.EntityFrameworkCore;
 
 namespace LowVisionAid.Web.Handouts;
 
 /// <summary>
-/// Reads a saved plan for the reports: its stored outputs (the figures exactly as the plan page shows them), its
-/// stored inputs, its choices, its trials, the client and the clinic settings.
+/// Reads a saved plan for the reports: its typed outputs (the planner's figures as numbers, read by
+/// <see cref="LegacyPlanReader"/> whatever schema they were saved in), its stored inputs, its choices, its trials,
+/// the client and the clinic settings. Words come from <see cref="PlanText"/>, the plan page's formatter, so the
+/// reports say what the plan page says. This is the one place the reports' input models are filled from a plan.
 /// </summary>
 /// <remarks>
 /// The chosen option of each goal: the one the clinician chose for the handout on the plan page, when there is one
 /// (the explicit choice always wins); otherwise the options of that goal whose trial ended dispensed, loaned or
 /// ordered (the device the client took home). Declined trials never count.
 /// </remarks>
-/// <remarks>
-/// Implementation note: the outputs are read as JSON by property name (Goals, Options, KitDevices, Figures …) and
-/// the stored figures are read back with the core's notation parsers, so the reports print what the plan page
-/// shows and never recompute a figure.
-/// </remarks>
-public sealed class StoredPlanReader(ClinicDbContext db)
+public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar)
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 
@@ -45,35 +42,33 @@ public sealed class StoredPlanReader(ClinicDbContext db)
 
         var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false)
             ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
-        return Read(plan, plan.Visit, plan.Visit.Client, settings);
+        return Read(plan, plan.Visit, plan.Visit.Client, settings, calendar);
     }
 
     /// <summary>Reads a plan already loaded with its visit, client and trials (pure: no database).</summary>
-    public static PlanReportData Read(Plan plan, Visit visit, Client client, ClinicSettings settings)
+    public static PlanReportData Read(Plan plan, Visit visit, Client client, ClinicSettings settings, ClinicCalendar calendar)
     {
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(visit);
         ArgumentNullException.ThrowIfNull(client);
         ArgumentNullException.ThrowIfNull(settings);
+        ArgumentNullException.ThrowIfNull(calendar);
         var imperial = settings.Units == UnitSystem.Imperial;
-        using var outputs = Parse(plan.OutputsJson);
-        using var inputs = Parse(plan.InputsJson);
-        var goals = Array(outputs.RootElement, "Goals");
-        var inputGoals = Array(inputs.RootElement, "Goals");
+        var outputs = LegacyPlanReader.Read(plan);
+        var inputs = PlanJson.Read<PlanInputs>(plan.InputsJson);
         var trials = plan.Trials.OrderBy(t => t.TrialDate).ThenBy(t => t.Id).ToList();
 
         var chosen = new List<ReportOption>();
         var cautions = new List<string>();
         var estimates = new List<MethodEstimate>();
         var choosing = trials.Where(t => t.Outcome is TrialOutcome.Dispensed or TrialOutcome.Loaned or TrialOutcome.Ordered).ToList();
-        var byTrial = new List<(int Goal, JsonElement Option, Trial Trial)>();
+        var byTrial = new List<(int Goal, RankedOption Option, Trial Trial)>();
         foreach (var trial in choosing)
         {
             // A trial counts for the first goal that lists its device.
-            for (int g = 0; g < goals.Count; g++)
+            for (var g = 0; g < outputs.Goals.Length; g++)
             {
-                var match = Options(goals[g]).FirstOrDefault(o => Matches(o, trial));
-                if (match.ValueKind != JsonValueKind.Undefined)
+                if (outputs.Goals[g].KitDevices.Concat(outputs.Goals[g].Options).FirstOrDefault(o => Matches(o.Option, trial)) is { } match)
                 {
                     byTrial.Add((g, match, trial));
                     break;
@@ -82,23 +77,24 @@ public sealed class StoredPlanReader(ClinicDbContext db)
         }
 
         var fromTrials = false;
-        for (int g = 0; g < goals.Count; g++)
+        for (var g = 0; g < outputs.Goals.Length; g++)
         {
-            var inputGoal = g < inputGoals.Count ? inputGoals[g] : default;
+            var goal = outputs.Goals[g];
             var picked = new List<ReportOption?>();
             if (plan.Choices.ForGoal(g) is { } choice)
             {
-                var list = Array(goals[g], choice.List == PlanOptionList.KitDevices ? "KitDevices" : "Options");
-                if (choice.Index < list.Count)
+                var list = goal.List(choice.List);
+                if (choice.Index < list.Length)
                 {
-                    picked.Add(Option(list[choice.Index], goals[g], inputGoal, inputs.RootElement, null, ChosenBy.Clinician));
+                    var option = list[choice.Index].Option;
+                    picked.Add(Option(option, outputs, goal, inputs, imperial, trials.LastOrDefault(t => Matches(option, t)), ChosenBy.Clinician));
                 }
             }
             else
             {
                 foreach (var (_, option, trial) in byTrial.Where(t => t.Goal == g))
                 {
-                    picked.Add(Option(option, goals[g], inputGoal, inputs.RootElement, trial, ChosenBy.Trial));
+                    picked.Add(Option(option.Option, outputs, goal, inputs, imperial, trial, ChosenBy.Trial));
                     fromTrials = true;
                 }
             }
@@ -108,16 +104,16 @@ public sealed class StoredPlanReader(ClinicDbContext db)
                 if (chosen.TrueForAll(c => c.Name != option.Name || c.Task != option.Task))
                 {
                     chosen.Add(option);
-                    Collect(goals[g], cautions, estimates);
+                    Collect(goal, imperial, cautions, estimates);
                 }
             }
         }
 
         var followUp = trials.Where(t => t.FollowUpDue is not null && t.FollowUpDone is null).Select(t => t.FollowUpDue).Min();
-        // Given on: the day of the latest decision that put a device in the handout.
+        // Given on: the clinic's day of the latest decision that put a device in the handout.
         var given = new[]
         {
-            plan.Choices.IsEmpty || plan.ChosenUtc is not { } at ? null : (DateOnly?)DateOnly.FromDateTime(at),
+            plan.Choices.IsEmpty || plan.ChosenUtc is not { } at ? null : (DateOnly?)calendar.DateOf(at),
             fromTrials ? choosing.Select(t => (DateOnly?)t.TrialDate).Max() : null,
         }.Max();
         return new PlanReportData(
@@ -131,15 +127,84 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             imperial ? PaperSize.Letter : PaperSize.A4,
             BodyPoints(settings.HandoutPrintSize),
             imperial,
-            given ?? DateOnly.FromDateTime(plan.CreatedUtc),
+            given ?? calendar.DateOf(plan.CreatedUtc),
             followUp,
-            Inputs(inputs.RootElement, imperial),
+            Inputs(inputs, imperial),
             estimates,
             chosen,
             cautions,
-            [.. trials.Select(t => new TrialRecord(t.TrialDate, t.DeviceDescription, t.Task is { } task ? Labels.Task(task) : "—",
-                Result(t), Labels.Outcome(t.Outcome)))]);
+            [.. trials.Select(t => new TrialRecord(t.TrialDate, t.DeviceDescription, t.Task is { } task ? PlanText.Task(task) : "—",
+                Result(t), Labels.Outcome(t.Outcome)))],
+            Reader(outputs, inputs),
+            Eyes(visit),
+            Near(visit, inputs),
+            Curve(outputs, inputs));
     }
+
+    /// <summary>
+    /// The print the client reads comfortably, from the typed plan: the critical print size of the measured reading
+    /// curve (methods.md §2.5), else the near threshold with the fluent reserve (methods.md §2.3), both at the near
+    /// test distance. The handout is taken as held where that print was read, with the correction the client wore
+    /// there; <see cref="HandoutPrint.Needed"/> moves it if another reading distance is ever given.
+    /// </summary>
+    public static HandoutReader? Reader(TypedPlan plan, PlanInputs inputs)
+    {
+        ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(inputs);
+        var threshold = inputs.NearThresholdM is { } m && m > 0 ? PrintSize.FromM(m) : (PrintSize?)null;
+        if (plan.Goals.Select(g => g.ReadingCurve).FirstOrDefault(c => c?.CriticalPrintSize is not null) is { } curve)
+        {
+            return new HandoutReader(curve.TestDistance, curve.TestDistance, curve.CriticalPrintSize, threshold, inputs.FluentReserveUsed());
+        }
+
+        return threshold is not null && inputs.NearTestDistanceMetres is { } d && d > 0
+            ? new HandoutReader(Distance.FromMetres(d), Distance.FromMetres(d), null, threshold, inputs.FluentReserveUsed())
+            : null;
+    }
+
+    private static List<EyeAcuity>? Eyes(Visit visit)
+    {
+        var eyes = new List<EyeAcuity>();
+        foreach (var (eye, typed, read) in new[]
+        {
+            ("Right eye", visit.DistanceRightText, visit.DistanceRight),
+            ("Left eye", visit.DistanceLeftText, visit.DistanceLeft),
+            ("Both eyes", visit.DistanceBothText, visit.DistanceBoth),
+        })
+        {
+            if (!string.IsNullOrWhiteSpace(typed))
+            {
+                eyes.Add(new EyeAcuity(eye, typed.Trim(), read));
+            }
+        }
+
+        return eyes.Count > 0 ? eyes : null;
+    }
+
+    // Near acuity as typed ("1.6M at 40 cm") beside the numbers the plan was made with.
+    private static NearAcuityRecord? Near(Visit visit, PlanInputs inputs)
+    {
+        if (inputs.NearThresholdM is not { } m || !(m > 0) || inputs.NearTestDistanceMetres is not { } at || !(at > 0))
+        {
+            return null;
+        }
+
+        var typed = (visit.NearThresholdText ?? "").Trim();
+        return new NearAcuityRecord(
+            string.IsNullOrWhiteSpace(visit.NearTestDistanceText) ? typed : $"{typed} at {visit.NearTestDistanceText.Trim()}",
+            PrintSize.FromM(m),
+            Distance.FromMetres(at));
+    }
+
+    private static ReadingCurveRecord? Curve(TypedPlan plan, PlanInputs inputs) =>
+        plan.Goals.Select(g => g.ReadingCurve).FirstOrDefault(c => c is not null) is { } curve
+            ? new ReadingCurveRecord(
+                curve.TestDistance,
+                [.. inputs.ReadingSpeeds.Select(s => new ReadingCurvePoint(PrintSize.FromM(s.PrintM), s.WordsPerMinute))],
+                curve.CriticalPrintSize,
+                curve.MaximumReadingSpeed,
+                curve.Refusal)
+            : null;
 
     /// <summary>
     /// The clinic's contact line split at "·", ";" or a line break: a part that is mostly digits is the phone, a part
@@ -178,136 +243,83 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             ? Math.Clamp(Math.Round(handoutPrint.ToPoints(HyperlegibleFont.XHeightRatio)), Reports.Handouts.ClientHandout.DefaultBodyPoints, Reports.Handouts.ClientHandout.MaximumBodyPoints)
             : Reports.Handouts.ClientHandout.DefaultBodyPoints;
 
-    private static JsonDocument Parse(string json)
+    // A trial of a kit device matches the option computed for that device; a trial typed without a kit device
+    // matches the generic option whose class it names (the plan page's trial link fills the device with the class's
+    // label). The option's own label is compared; no text is turned back into a class.
+    private static bool Matches(MagnifierOption option, Trial trial) =>
+        trial.KitDevice is { } kit
+            ? string.Equals(option.KitDeviceId, kit.Code, StringComparison.Ordinal)
+            : option.KitDeviceId is null && string.Equals(PlanText.Kind(option.Kind), trial.DeviceDescription.Trim(), StringComparison.OrdinalIgnoreCase);
+
+    private static ReportOption? Option(MagnifierOption option, TypedPlan plan, PlannedGoal goal, PlanInputs inputs, bool imperial, Trial? trial, ChosenBy chosenBy)
     {
-        try
-        {
-            return JsonDocument.Parse(string.IsNullOrWhiteSpace(json) ? "{}" : json);
-        }
-        catch (JsonException)
-        {
-            return JsonDocument.Parse("{}");
-        }
-    }
-
-    private static List<JsonElement> Array(JsonElement element, string name) =>
-        element.ValueKind == JsonValueKind.Object && element.TryGetProperty(name, out var value) && value.ValueKind == JsonValueKind.Array
-            ? [.. value.EnumerateArray()]
-            : [];
-
-    private static string? Text(JsonElement element, string name) =>
-        element.ValueKind == JsonValueKind.Object && element.TryGetProperty(name, out var value) && value.ValueKind == JsonValueKind.String
-            ? value.GetString()
-            : null;
-
-    private static double? Number(JsonElement element, string name) =>
-        element.ValueKind == JsonValueKind.Object && element.TryGetProperty(name, out var value) && value.ValueKind == JsonValueKind.Number
-            ? value.GetDouble()
-            : null;
-
-    private static IEnumerable<JsonElement> Options(JsonElement goal) => Array(goal, "KitDevices").Concat(Array(goal, "Options"));
-
-    // A trial of a kit device matches the option computed for that device; a typed trial matches the generic
-    // option of the kind it names (the plan page's trial link fills the device with the kind).
-    private static bool Matches(JsonElement option, Trial trial)
-    {
-        var kitCode = Text(option, "KitCode");
-        if (trial.KitDevice is { } kit)
-        {
-            return string.Equals(kitCode, kit.Code, StringComparison.Ordinal);
-        }
-
-        return kitCode is null && string.Equals(Text(option, "Kind"), trial.DeviceDescription.Trim(), StringComparison.OrdinalIgnoreCase);
-    }
-
-    private static ReportOption? Option(JsonElement option, JsonElement goal, JsonElement inputGoal, JsonElement inputs, Trial? trial, ChosenBy chosenBy)
-    {
-        var figures = Array(option, "Figures")
-            .Select(f => new OptionFigure(Text(f, "Label") ?? "", Text(f, "Value") ?? ""))
-            .Where(f => f.Label.Length > 0)
-            .ToList();
-        string? Figure(string label) => figures.FirstOrDefault(f => f.Label == label)?.Value;
-        var power = LeadingNumber(Figure("Power given"));
-        var working = StoredDistance(Figure("Working distance"));
-        if (power is not > 0 || working is null)
+        if (option.DeliveredPower.Dioptres <= 0)
         {
             return null;
         }
 
-        var target = Number(inputGoal, "TargetM") is { } m && m > 0
-            ? PrintSize.FromM(m)
-            : PrintSizeNotation.Parse(Text(goal, "Target"), Invariant).TryGetValue(out var typed) ? typed : PrintSize.FromM(1.0);
-        var kind = Text(option, "Kind") ?? "";
-        var family = Family(kind) ?? OptionKind.LargePrint;
-        var kitCode = Text(option, "KitCode");
+        var ranked = goal.Options.Concat(goal.KitDevices).First(r => ReferenceEquals(r.Option, option));
         // The kit device as it was when the plan was made (in the stored inputs), else as the trial recorded it.
-        var kitPoint = kitCode is null ? default : Array(inputs, "Kit").FirstOrDefault(k => Text(k, "Code") == kitCode);
-        var lit = kitPoint.ValueKind == JsonValueKind.Object && kitPoint.TryGetProperty("Illuminated", out var flag) && flag.ValueKind == JsonValueKind.True;
+        var kitPoint = option.KitDeviceId is { } code ? inputs.Kit.FirstOrDefault(k => k.Code == code) : null;
         return new ReportOption(
-            Text(option, "KitName") ?? trial?.KitDevice?.Name ?? kind,
-            family,
-            kind,
-            Text(goal, "Title") ?? "",
-            target,
-            Number(inputs, "NearThresholdM") is { } t && t > 0 ? PrintSize.FromM(t) : null,
-            ReserveFor(goal),
-            Number(inputs, "NearTestDistanceMetres") is { } d && d > 0 ? Distance.FromMetres(d) : null,
-            Power.FromDioptres(power.Value),
-            working.Value,
-            StoredDistance(Figure("Eye to lens")),
-            StoredDistance(Figure("Field on the page")),
-            int.TryParse(Figure("Letters in view"), NumberStyles.Integer, Invariant, out var letters) ? letters : null,
-            family == OptionKind.VideoMagnifier || lit || trial?.KitDevice?.Illuminated == true,
-            figures,
-            [.. Array(option, "Reasons").Select(r => Text(r, "Text")).OfType<string>()],
-            [.. Array(option, "Notes").Where(n => n.ValueKind == JsonValueKind.String).Select(n => n.GetString()!)],
-            chosenBy);
+            option.KitDeviceId is not null && !plan.KitNames.ContainsKey(option.KitDeviceId) && trial?.KitDevice?.Name is { } trialName ? trialName : PlanText.Name(option, plan),
+            option.Kind,
+            PlanText.Kind(option.Kind),
+            PlanText.GoalTitle(goal, plan.Imperial),
+            goal.TargetPrint ?? PrintSize.FromM(1.0),
+            inputs.NearThresholdM is { } t && t > 0 ? PrintSize.FromM(t) : null,
+            goal.Reserve?.Reserve ?? AcuityReserve.Fluent,
+            inputs.NearTestDistanceMetres is { } d && d > 0 ? Distance.FromMetres(d) : null,
+            option.DeliveredPower,
+            option.WorkingDistance.Abs(),
+            option.EyeToLens?.Abs(),
+            option.LinearField?.Abs(),
+            option.LettersInView,
+            option.Kind == OptionKind.VideoMagnifier || kitPoint?.Illuminated == true || trial?.KitDevice?.Illuminated == true,
+            [.. PlanText.Figures(option, imperial).Select(f => new OptionFigure(f.Label, f.Value))],
+            [.. ranked.Reasons.Select(PlanText.Reason)],
+            PlanText.Notes(option),
+            chosenBy,
+            trial?.Outcome == TrialOutcome.Declined,
+            // A device the handout holds because of its trial is for what it was tried for; a clinician's choice is for its goal.
+            chosenBy == ChosenBy.Trial && trial?.Task is { } task ? TaskOf(task, inputs) : null,
+            option.AccommodationOrAddNeeded,
+            [.. ranked.Reasons.Select(r => new OptionReason(r.Text, r.InFavour))],
+            option is ScreenMagnificationOption screen ? new HandoutScreen(screen.ZoomPercent, screen.ReversedPolarityAdvised) : null);
     }
 
-    private static void Collect(JsonElement goal, List<string> cautions, List<MethodEstimate> estimates)
+    // The trial's task in the plan's words, with the detail of the goal recorded for that task ("Letters (bills)").
+    private static string TaskOf(GoalTask task, PlanInputs inputs) =>
+        PlanText.Task(task) + (inputs.Goals.FirstOrDefault(g => g.Task == task)?.Detail is { } detail ? $" ({detail})" : "");
+
+    private static void Collect(PlannedGoal goal, bool imperial, List<string> cautions, List<MethodEstimate> estimates)
     {
-        foreach (var text in Array(goal, "Cautions").Select(c => Text(c, "Text")).OfType<string>())
+        foreach (var caution in goal.Cautions)
         {
-            if (!cautions.Contains(text))
+            if (!cautions.Contains(caution.Text))
             {
-                cautions.Add(text);
+                cautions.Add(caution.Text);
             }
         }
 
-        var disagree = goal.TryGetProperty("MethodsDisagree", out var flag) && flag.ValueKind == JsonValueKind.True;
-        foreach (var e in Array(goal, "Estimates"))
+        var disagree = !goal.Disagreements.IsDefaultOrEmpty;
+        foreach (var e in goal.Estimates)
         {
-            var method = Text(e, "Method") ?? "";
+            var method = PlanText.Method(e.Method);
             if (estimates.Exists(x => x.Method == method))
             {
                 continue;
             }
 
-            var dioptres = LeadingNumber(Text(e, "EquivalentPower"));
             estimates.Add(new MethodEstimate(
                 method,
-                dioptres is > 0 ? Power.FromDioptres(dioptres.Value) : null,
-                $"Viewing distance {Text(e, "ViewingDistance")}; magnification {Text(e, "Magnification")}; reserve {Text(e, "Reserve")}",
+                e.EquivalentPower,
+                $"Viewing distance {PlanText.Length(e.EquivalentViewingDistance, imperial)}; magnification {PlanText.EstimateMagnification(e, imperial)}; reserve {PlanText.EstimateReserve(e)}",
                 disagree));
         }
     }
 
-    /// <summary>
-    /// The reserve the stored plan used: the goal's recorded reserve (plans from method 2026.12.2 on), else the reserve
-    /// of its first estimate with one (older plans, whose first row was Kestenbaum at 1:1 for 1M, are read past it),
-    /// else 2:1. The plan is read as it was made, never re-derived from today's rule.
-    /// </summary>
-    private static AcuityReserve ReserveFor(JsonElement goal)
-    {
-        var text = Text(goal, "Reserve")
-            ?? Array(goal, "Estimates").Where(e => Text(e, "Method") != PlanBuilder.MethodLabel(PowerMethod.KestenbaumClassic))
-                .Select(e => Text(e, "Reserve")).FirstOrDefault(r => r is not null && r.EndsWith(":1", StringComparison.Ordinal));
-        return text is not null && double.TryParse(text.AsSpan(0, text.Length - 2), NumberStyles.Float, Invariant, out var r) && r is >= 1 and <= AcuityReserve.MaximumRatio
-            ? AcuityReserve.FromRatio(r)
-            : AcuityReserve.Fluent;
-    }
-
-    private static List<SummaryInput> Inputs(JsonElement inputs, bool imperial)
+    private static List<SummaryInput> Inputs(PlanInputs inputs, bool imperial)
     {
         var list = new List<SummaryInput>();
         void Add(string label, string? value)
@@ -318,33 +330,26 @@ public sealed class StoredPlanReader(ClinicDbContext db)
             }
         }
 
-        string? Length(string name) => Number(inputs, name) is { } m && m > 0
-            ? DistanceNotation.Format(Distance.FromMetres(m), Invariant, imperial ? "in" : null)
-            : null;
+        static string? Length(double? metres, bool imperial) => metres is { } m && m > 0 ? PlanText.Length(Distance.FromMetres(m), imperial) : null;
 
-        Add("Distance acuity (logMAR)", Number(inputs, "DistanceLogMar")?.ToString("0.00", Invariant));
-        Add("Smallest print read at near", Number(inputs, "NearThresholdM") is { } t ? t.ToString("0.0#", Invariant) + "M" : null);
-        Add("Near test distance", Length("NearTestDistanceMetres"));
-        Add("Preferred working distance", Length("WorkingDistanceMetres"));
-        Add("Contrast sensitivity (logCS)", Number(inputs, "LogContrastSensitivity")?.ToString("0.00", Invariant));
-        Add("Add worn", Number(inputs, "AddWornDioptres") is { } add ? Power.FromDioptres(add).ToString(null, Invariant) : null);
-        Add("Accommodation", Number(inputs, "MeasuredAmplitudeDioptres") is { } a ? Power.FromDioptres(a).ToString(null, Invariant) + " measured" : "estimated from age");
-        Add("Useful eyes", Number(inputs, "UsefulEyes") is { } eyes ? eyes.ToString("0", Invariant) : null);
-        Add("Hands-free wanted", Bool(inputs, "HandsFree"));
-        Add("Tremor", Bool(inputs, "Tremor"));
-        Add("Character pitch k", Number(inputs, "CharacterPitch")?.ToString("0.0#", Invariant));
-        foreach (var goal in Array(inputs, "Goals"))
+        Add("Distance acuity (logMAR)", inputs.DistanceLogMar?.ToString("0.00", Invariant));
+        Add("Smallest print read at near", inputs.NearThresholdM is { } t ? t.ToString("0.0#", Invariant) + "M" : null);
+        Add("Near test distance", Length(inputs.NearTestDistanceMetres, imperial));
+        Add("Preferred working distance", Length(inputs.WorkingDistanceMetres, imperial));
+        Add("Contrast sensitivity (logCS)", inputs.LogContrastSensitivity?.ToString("0.00", Invariant));
+        Add("Add worn", inputs.AddWornDioptres is { } add ? PlanText.Power(Power.FromDioptres(add)) : null);
+        Add("Accommodation", inputs.MeasuredAmplitudeDioptres is { } a ? PlanText.Power(Power.FromDioptres(a)) + " measured" : "estimated from age");
+        Add("Eyes in use", inputs.UsefulEyes >= 2 ? "Both eyes" : "One eye");
+        Add("Hands-free wanted", PlanText.YesNo(inputs.HandsFree));
+        Add("Tremor", PlanText.YesNo(inputs.Tremor));
+        Add("Letter pitch used for letters in view", inputs.CharacterPitch > 0 ? inputs.CharacterPitch.ToString("0.0#", Invariant) + " × the x-height" : null);
+        foreach (var goal in inputs.Goals)
         {
-            Add("Goal", $"{Text(goal, "Task")}{(Text(goal, "Detail") is { } detail ? " (" + detail + ")" : "")}: target {Text(goal, "TargetText")}");
+            Add("Goal", $"{PlanText.Task(goal.Task)}{(goal.Detail is { } detail ? " (" + detail + ")" : "")}: target {goal.TargetText}");
         }
 
         return list;
     }
-
-    private static string? Bool(JsonElement element, string name) =>
-        element.ValueKind == JsonValueKind.Object && element.TryGetProperty(name, out var value) && value.ValueKind is JsonValueKind.True or JsonValueKind.False
-            ? (value.GetBoolean() ? "Yes" : "No")
-            : null;
 
     private static string Result(Trial t)
     {
@@ -353,28 +358,4 @@ public sealed class StoredPlanReader(ClinicDbContext db)
         var text = string.Join("; ", parts);
         return text.Length > 0 ? text : "—";
     }
-
-    // The stored kind is the plan page's label for it (PlanBuilder.KindLabel).
-    private static OptionKind? Family(string kind) =>
-        Enum.GetValues<OptionKind>().Select(k => (OptionKind?)k).FirstOrDefault(k => PlanBuilder.KindLabel(k!.Value) == kind);
-
-    // Stored figures are the plan page's text, e.g. "+8.00 D (enough)" and "12.5 cm": read back with the core parsers.
-    private static double? LeadingNumber(string? text)
-    {
-        if (string.IsNullOrWhiteSpace(text))
-        {
-            return null;
-        }
-
-        var end = 0;
-        while (end < text.Length && (char.IsDigit(text[end]) || text[end] is '+' or '-' or '.'))
-        {
-            end++;
-        }
-
-        return double.TryParse(text.AsSpan(0, end), NumberStyles.Float, Invariant, out var value) ? value : null;
-    }
-
-    private static Distance? StoredDistance(string? text) =>
-        text is not null && DistanceNotation.Parse(text, Invariant).TryGetValue(out var d) ? d : null;
 }

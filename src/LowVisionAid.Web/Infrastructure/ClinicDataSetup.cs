@@ -20,6 +20,7 @@ internal static class ClinicDataSetup
             .ValidateOnStart();
         services.AddSingleton(sp => ClinicFolders.Resolve(sp.GetRequiredService<IOptions<ClinicDataOptions>>().Value, sp.GetRequiredService<IHostEnvironment>().ContentRootPath));
         services.AddSingleton(TimeProvider.System);
+        services.AddSingleton(sp => ClinicCalendar.From(sp.GetRequiredService<IConfiguration>(), sp.GetRequiredService<TimeProvider>()));
 
         // Options built once: the connection string (and the data folder it creates) does not change while the app runs.
         services.AddDbContext<ClinicDbContext>(

@@ -4,7 +4,7 @@ using LowVisionAid.Web.Pages.Admin;
 using LowVisionAid.Web.Pages.Clients;
 using LowVisionAid.Web.Pages.FollowUps;
 using LowVisionAid.Web.Pages.Kit;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Pages.Settings;
 using LowVisionAid.Web.Pages.Trials;
 using LowVisionAid.Web.Pages.Visits;

@@ -1,6 +1,10 @@
 namespace LowVisionAid.Browser.Tests.PageObjects;
 
-/// <summary>A saved plan (Plans/{id}): per goal the required power, the estimates, the options with their choice buttons and the cautions; then the trials, and the handout and print links.</summary>
+/// <summary>
+/// A saved plan (Plans/{id}): per goal the required power and reserve, one comparison table of the options, each
+/// option in full in a disclosure (details/summary) with its choice button, the estimates in a disclosure; then the
+/// trials, and the handout and print links.
+/// </summary>
 public sealed class PlanPage(IPage page)
 {
     private const string RecordTrialLink = "Record a trial";
@@ -10,16 +14,26 @@ public sealed class PlanPage(IPage page)
     /// <summary>The section of goal <paramref name="line"/> (from 1), named by its heading.</summary>
     public ILocator Goal(int line) => page.Locator($"section.goal-plan[aria-labelledby=\"goal-{line - 1}\"]");
 
-    /// <summary>The strong figure under "Required power" in a goal's section.</summary>
-    public ILocator RequiredPower(int line) => Goal(line).Locator("h3:text-is(\"Required power\") + p");
+    /// <summary>The required power beside its term in a goal's facts.</summary>
+    public ILocator RequiredPower(int line) => Goal(line).Locator("dt:text-is(\"Required power\") + dd");
 
-    public ILocator Estimates(int line) => Goal(line).GetByRole(AriaRole.Table, new() { Name = "The required power by each method, side by side" });
+    /// <summary>The estimates table of a goal (inside its closed disclosure, so found by its place, not its role).</summary>
+    public ILocator Estimates(int line) => Goal(line).Locator("details.estimates table");
 
-    /// <summary>The ranked options (not the kit devices) of a goal.</summary>
-    public ILocator Options(int line) => Goal(line).Locator($"article.option[aria-labelledby^=\"goal-{line - 1}-option-\"]");
+    /// <summary>
+    /// Opens a goal's estimates disclosure so its rows can be read by role, without moving the focus (the keyboard flow
+    /// goes on from where it was; opening a disclosure by keyboard is checked in <c>PlanPageLayoutTests</c>).
+    /// </summary>
+    public Task OpenEstimatesAsync(int line) => Goal(line).Locator("details.estimates").EvaluateAsync("d => { d.open = true; }");
 
-    /// <summary>The heading of the first-ranked option of a goal.</summary>
-    public ILocator FirstOptionHeading(int line) => page.Locator($"#goal-{line - 1}-option-0");
+    /// <summary>The comparison table of a goal: a row per option.</summary>
+    public ILocator Comparison(int line) => Goal(line).GetByRole(AriaRole.Table, new() { Name = $"Goal {line} options compared", Exact = false });
+
+    /// <summary>The ranked options (not the kit devices) of a goal, each a disclosure.</summary>
+    public ILocator Options(int line) => Goal(line).Locator($"details.option[id^=\"goal-{line - 1}-option-\"]");
+
+    /// <summary>The summary line of the first-ranked option of a goal.</summary>
+    public ILocator FirstOptionHeading(int line) => page.Locator($"#goal-{line - 1}-option-0 > summary");
 
     public ILocator Trials => page.GetByRole(AriaRole.Table, new() { Name = "Devices tried" });
 
@@ -34,14 +48,24 @@ public sealed class PlanPage(IPage page)
 
     public ILocator SummaryLink => page.GetByRole(AriaRole.Link, new() { Name = SummaryLinkName, Exact = true });
 
-    /// <summary>The option card whose heading contains <paramref name="name"/> (a kit device's name or code, or a kind).</summary>
+    /// <summary>The option whose summary line contains <paramref name="name"/> (a kit device's name or code, or a kind).</summary>
     public ILocator Option(string name) =>
-        page.Locator("article.option").Filter(new() { Has = page.GetByRole(AriaRole.Heading, new() { Name = name }) });
+        page.Locator("details.option").Filter(new() { Has = page.Locator("summary", new() { HasTextString = name }) });
+
+    /// <summary>Opens an option's disclosure (its full figures, posture, reasons and buttons) when it is closed.</summary>
+    public async Task OpenAsync(string name)
+    {
+        var option = Option(name).First;
+        if (await option.GetAttributeAsync("open") is null)
+        {
+            await option.Locator("summary").ClickAsync();
+        }
+    }
 
     /// <summary>The "Choose for the handout" button of an option card.</summary>
     public ILocator Choose(string name) => Option(name).GetByRole(AriaRole.Button, new() { Name = "Choose for the handout" });
 
     /// <summary>A figure of an option card, as the plan shows it (e.g. "Working distance").</summary>
     public ILocator Figure(string name, string label) =>
-        Option(name).Locator("tr").Filter(new() { Has = page.GetByRole(AriaRole.Rowheader, new() { Name = label, Exact = true }) }).Locator("td");
+        Option(name).Locator("tr").Filter(new() { Has = page.Locator($"th:text-is(\"{label}\")") }).Locator("td");
 }

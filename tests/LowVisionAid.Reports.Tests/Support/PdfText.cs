@@ -7,13 +7,24 @@ namespace LowVisionAid.Reports.Tests.Support;
 /// <summary>What PdfPig reads back from a rendered document.</summary>
 internal sealed partial class PdfText
 {
-    private PdfText(string words, IReadOnlyList<string> footers, IReadOnlyList<Letter> letters, int pages)
+    private PdfText(string words, IReadOnlyList<string> footers, IReadOnlyList<Letter> letters, int pages, IReadOnlyList<string> pageWords, double lastPageUsed)
     {
         Words = words;
         Footers = footers;
         Letters = letters;
         PageCount = pages;
+        PageWords = pageWords;
+        LastPageUsed = lastPageUsed;
     }
+
+    /// <summary>Each page's words but the footer, joined by single spaces.</summary>
+    public IReadOnlyList<string> PageWords { get; }
+
+    /// <summary>How far down the last page its text reaches, as a fraction of the page height.</summary>
+    public double LastPageUsed { get; }
+
+    /// <summary>True when the whole of <paramref name="sentence"/> is on one page.</summary>
+    public bool OnOnePage(string sentence) => PageWords.Any(p => p.Contains(Normalise(sentence), StringComparison.Ordinal));
 
     /// <summary>
     /// Every word of every page but the footers, joined by single spaces (line breaks become spaces), so that a
@@ -34,6 +45,8 @@ internal sealed partial class PdfText
         var words = new List<string>();
         var footers = new List<string>();
         var letters = new List<Letter>();
+        var perPage = new List<string>();
+        double lastUsed = 0;
         foreach (var page in document.GetPages())
         {
             var pageWords = page.GetWords().ToList();
@@ -47,10 +60,12 @@ internal sealed partial class PdfText
             }
 
             words.AddRange(pageWords.Select(w => w.Text));
+            perPage.Add(string.Join(' ', pageWords.Select(w => w.Text)));
             letters.AddRange(page.Letters);
+            lastUsed = pageWords.Count == 0 ? 0 : (page.Height - pageWords.Min(w => w.BoundingBox.Bottom)) / page.Height;
         }
 
-        return new PdfText(string.Join(' ', words), footers, letters, document.NumberOfPages);
+        return new PdfText(string.Join(' ', words), footers, letters, document.NumberOfPages, perPage, lastUsed);
     }
 
     /// <summary>Collapses runs of white space, so wrapped text compares with the sentence it came from.</summary>

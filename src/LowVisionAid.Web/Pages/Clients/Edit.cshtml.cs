@@ -7,7 +7,7 @@ using Microsoft.AspNetCore.Mvc.RazorPages;
 
 namespace LowVisionAid.Web.Pages.Clients;
 
-public sealed class EditModel(IValidator<ClientInput> validator, EditClientHandler handler) : PageModel
+public sealed class EditModel(IValidator<ClientInput> validator, EditClientHandler handler, Infrastructure.ClinicCalendar calendar) : PageModel
 {
     public const string ConflictMessage =
         "Someone else saved this client's details while you were editing them. Nothing you typed is lost: your version is still in the form below, not yet saved. "
@@ -71,7 +71,7 @@ public sealed class EditModel(IValidator<ClientInput> validator, EditClientHandl
             // Keep everything typed; take the saved version so that a second Save deliberately keeps this one.
             ModelState.Remove($"{nameof(Input)}.{nameof(ClientInput.Version)}");
             Input.Version = result.CurrentVersion;
-            var when = result.ChangedAtUtc?.ToString("HH:mm 'UTC'", CultureInfo.InvariantCulture);
+            var when = result.ChangedAtUtc is { } at ? calendar.TimeOf(at) : null;
             ModelState.AddModelError(string.Empty, when is null ? ConflictMessage : $"{ConflictMessage} (Saved by the other person at {when}.)");
             return Page();
         }

@@ -7,13 +7,13 @@ namespace LowVisionAid.Web.Pages.FollowUps;
 public sealed record FollowUpRow(int TrialId, Guid Version, int ClientId, string ClientCode, int PlanId, string Device, DateOnly Due, string Status);
 
 /// <summary>Follow-ups booked and not yet done, earliest first, each marked overdue, due today or upcoming, a page at a time.</summary>
-public sealed class FollowUpListHandler(ClinicDbContext db, TimeProvider clock)
+public sealed class FollowUpListHandler(ClinicDbContext db, Infrastructure.ClinicCalendar calendar)
 {
     public const int PageSize = 50;
 
     public async Task<ListPage<FollowUpRow>> HandleAsync(int page, CancellationToken ct)
     {
-        var today = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        var today = calendar.Today;
         var rows = await ListPage.ReadAsync(db.Trials.AsNoTracking()
             .Where(t => t.FollowUpDue != null && t.FollowUpDone == null)
             .OrderBy(t => t.FollowUpDue).ThenBy(t => t.Id)
@@ -25,7 +25,7 @@ public sealed class FollowUpListHandler(ClinicDbContext db, TimeProvider clock)
         due < today ? "Overdue" : due == today ? "Due today" : "Upcoming";
 }
 
-public sealed class FollowUpDoneHandler(ClinicDbContext db, TimeProvider clock)
+public sealed class FollowUpDoneHandler(ClinicDbContext db, Infrastructure.ClinicCalendar calendar)
 {
     /// <summary>Marks the follow-up done; false when the trial is gone or someone changed it meanwhile.</summary>
     public async Task<bool> HandleAsync(int trialId, Guid version, CancellationToken ct)
@@ -36,7 +36,7 @@ public sealed class FollowUpDoneHandler(ClinicDbContext db, TimeProvider clock)
             return false;
         }
 
-        trial.FollowUpDone = DateOnly.FromDateTime(clock.GetLocalNow().DateTime);
+        trial.FollowUpDone = calendar.Today;
         try
         {
             await db.SaveChangesAsync(ct).ConfigureAwait(false);

@@ -2,7 +2,7 @@ using System.Globalization;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Kit;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using Microsoft.EntityFrameworkCore;
 using CoreKitDevice = LowVisionAid.Optics.Kit.KitDevice;
 
@@ -17,7 +17,7 @@ public sealed class KitHandler(ClinicDbContext db)
     public async Task<IReadOnlyList<KitRow>> ListAsync(CancellationToken ct)
     {
         var devices = await db.KitDevices.AsNoTracking().OrderBy(k => k.Kind).ThenBy(k => k.Code).ToListAsync(ct).ConfigureAwait(false);
-        return [.. devices.Select(k => new KitRow(k.Id, k.Code, k.Name, Labels.Kind(k.Kind), k.Power?.ToString(null, CultureInfo.InvariantCulture),
+        return [.. devices.Select(k => new KitRow(k.Id, k.Code, k.Name, Web.Plans.PlanText.Device(k.Kind), k.Power?.ToString(null, CultureInfo.InvariantCulture),
             k.Aperture is { } a ? Optics.Notation.DistanceNotation.Format(a, CultureInfo.InvariantCulture, "mm") : null, k.Illuminated, k.InStock, k.IsDemo))];
     }
 

@@ -13,7 +13,7 @@ public sealed class NewModel(IValidator<KitInput> validator, KitHandler handler)
     public KitInput Input { get; set; } = new();
 
     public static IReadOnlyList<SelectListItem> KindChoices { get; } =
-        [new SelectListItem("Choose the kind", ""), .. Labels.Choices<DeviceKind>(Labels.Kind)];
+        [new SelectListItem("Choose the kind", ""), .. Labels.Choices<DeviceKind>(Web.Plans.PlanText.Device)];
 
     public void OnGet()
     {

@@ -1,16 +1,25 @@
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Planning;
+using LowVisionAid.Web.Plans;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
 namespace LowVisionAid.Web.Pages.Plans;
 
-public sealed class DetailsModel(PlanDetailsHandler handler, ChoosePlanOptionHandler choose) : PageModel
+public sealed class DetailsModel(PlanDetailsHandler handler, ChoosePlanOptionHandler choose, Infrastructure.ClinicCalendar calendar) : PageModel
 {
     public PlanView Plan { get; private set; } = null!;
 
     /// <summary>Why a choice was refused, shown at the top of the page.</summary>
     [TempData]
     public string? ChoiceProblem { get; set; }
+
+    /// <summary>When the plan was made, in the clinic's time zone.</summary>
+    public string Made => calendar.DateAndTime(Plan.Created.UtcDateTime);
+
+    /// <summary>The cautions every planned goal carries, shown once above the goals.</summary>
+    public IReadOnlyList<Caution> CommonCautions { get; private set; } = [];
 
     public async Task<IActionResult> OnGetAsync(int id, CancellationToken ct)
     {
@@ -21,8 +30,15 @@ public sealed class DetailsModel(PlanDetailsHandler handler, ChoosePlanOptionHan
         }
 
         Plan = plan;
+        var planned = plan.Outputs.Goals.Where(g => g.IsPlanned).ToList();
+        CommonCautions = planned.Count == 0
+            ? []
+            : [.. planned[0].Cautions.Where(c => planned.TrueForAll(g => g.Cautions.Contains(c)))];
         return Page();
     }
+
+    /// <summary>The cautions of one goal that are not already shown for the whole plan.</summary>
+    public IEnumerable<Caution> OwnCautions(PlannedGoal goal) => goal.Cautions.Where(c => !CommonCautions.Contains(c));
 
     /// <summary>Chooses one option of a goal for the handout, in place of any earlier choice for that goal.</summary>
     public async Task<IActionResult> OnPostChooseAsync(int id, int goal, PlanOptionList list, int index, CancellationToken ct)
@@ -48,21 +64,36 @@ public sealed class DetailsModel(PlanDetailsHandler handler, ChoosePlanOptionHan
         return Redirect($"/Plans/{id}#{CardId(goal, list == PlanOptionList.KitDevices, index)}");
     }
 
-    /// <summary>One option as a card: its figures, its reasons, a link to record a trial of it and its choice.</summary>
-    public OptionCard Card(OptionRow option, int goal, int index, bool fromKit)
+    /// <summary>Every option of a goal, generic options first, then the kit devices, each as a card.</summary>
+    public IReadOnlyList<OptionCard> Cards(PlannedGoal goal, int g)
+    {
+        ArgumentNullException.ThrowIfNull(goal);
+        return [.. goal.Options.Select((o, i) => Card(o, g, i, fromKit: false)), .. goal.KitDevices.Select((o, i) => Card(o, g, i, fromKit: true))];
+    }
+
+    private OptionCard Card(RankedOption ranked, int goal, int index, bool fromKit)
     {
         var place = new PlanOptionRef(goal, fromKit ? PlanOptionList.KitDevices : PlanOptionList.Options, index);
-        return new(option, TrialLink(option), CardId(goal, fromKit, index), Plan.Id, place, Plan.Choices.Contains(place));
+        var o = ranked.Option;
+        var name = PlanText.Name(o, Plan.Outputs);
+        var trialLink = o.KitDeviceId is { } code
+            ? $"/Trials/New?planId={Plan.Id}&kit={Uri.EscapeDataString(code)}"
+            : $"/Trials/New?planId={Plan.Id}&device={Uri.EscapeDataString(PlanText.Kind(o.Kind))}";
+        return new(ranked, name, fromKit, trialLink, CardId(goal, fromKit, index), Plan.Id, place, Plan.Choices.Contains(place),
+            OptionUse.IsUsable(o), Plan.Outputs.Imperial);
     }
 
     public static string CardId(int goal, bool fromKit, int index) =>
         string.Create(System.Globalization.CultureInfo.InvariantCulture, $"goal-{goal}-{(fromKit ? "kit" : "option")}-{index}");
-
-    public string TrialLink(OptionRow option) =>
-        option.KitCode is { } code
-            ? $"/Trials/New?planId={Plan.Id}&kit={Uri.EscapeDataString(code)}"
-            : $"/Trials/New?planId={Plan.Id}&device={Uri.EscapeDataString(option.Kind)}";
 }
 
+/// <summary>One option of a goal: its row in the comparison table and its full figures one step away.</summary>
 /// <param name="Chosen">True when the clinician chose this option for the handout.</param>
-public sealed record OptionCard(OptionRow Option, string TrialLink, string HeadingId, int PlanId, PlanOptionRef Place, bool Chosen);
+public sealed record OptionCard(
+    RankedOption Ranked, string Name, bool FromKit, string TrialLink, string Id, int PlanId, PlanOptionRef Place, bool Chosen, bool Usable, bool Imperial)
+{
+    public MagnifierOption Option => Ranked.Option;
+
+    /// <summary>The row's first cell: position and name, with the kit code for a kit device.</summary>
+    public string Title => $"{(FromKit ? "Kit " : "")}{Ranked.Position}. {Name}{(Option.KitDeviceId is { } code ? $" ({code})" : "")}";
+}

@@ -40,7 +40,7 @@ public sealed class IndexModel(IValidator<SettingsInput> validator, SettingsHand
     ];
 
     /// <summary>The label of a kind of option, as the plan shows it.</summary>
-    public static string KindLabel(OptionKind kind) => Plans.PlanBuilder.KindLabel(kind);
+    public static string KindLabel(OptionKind kind) => Web.Plans.PlanText.Kind(kind);
 
     public async Task OnGetAsync(CancellationToken ct)
     {

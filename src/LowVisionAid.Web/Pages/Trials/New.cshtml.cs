@@ -9,7 +9,7 @@ using Microsoft.AspNetCore.Mvc.Rendering;
 
 namespace LowVisionAid.Web.Pages.Trials;
 
-public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler handler, TimeProvider clock) : PageModel
+public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler handler, Infrastructure.ClinicCalendar calendar) : PageModel
 {
     [BindProperty(SupportsGet = true)]
     public int PlanId { get; set; }
@@ -28,7 +28,7 @@ public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler h
     public TrialContext Context { get; private set; } = null!;
 
     public static IReadOnlyList<SelectListItem> TaskChoices { get; } =
-        [new SelectListItem("Not for one task", ""), .. Labels.Choices<GoalTask>(Labels.Task)];
+        [new SelectListItem("Not for one task", ""), .. Labels.Choices<GoalTask>(Web.Plans.PlanText.Task)];
 
     public static IReadOnlyList<SelectListItem> OutcomeChoices { get; } =
         [new SelectListItem("Choose what was decided", ""), .. Labels.Choices<TrialOutcome>(Labels.Outcome)];
@@ -40,7 +40,7 @@ public sealed class NewModel(IValidator<TrialInput> validator, NewTrialHandler h
             return NotFound();
         }
 
-        Input.TrialDate = DateOnly.FromDateTime(clock.GetLocalNow().DateTime).ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+        Input.TrialDate = calendar.Today.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
         Input.KitDeviceId = Kit is null ? null : await handler.KitIdAsync(Kit, ct).ConfigureAwait(false);
         Input.DeviceDescription = Input.KitDeviceId is null ? Device : null;
         return Page();

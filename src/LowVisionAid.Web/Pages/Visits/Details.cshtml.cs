@@ -1,5 +1,5 @@
 using Microsoft.AspNetCore.Mvc;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
 namespace LowVisionAid.Web.Pages.Visits;

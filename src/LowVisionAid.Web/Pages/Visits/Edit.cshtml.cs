@@ -4,7 +4,7 @@ using Microsoft.AspNetCore.Mvc;
 
 namespace LowVisionAid.Web.Pages.Visits;
 
-public sealed class EditModel(IValidator<VisitInput> validator, VisitFormHandler form, EditVisitHandler handler)
+public sealed class EditModel(IValidator<VisitInput> validator, VisitFormHandler form, EditVisitHandler handler, Infrastructure.ClinicCalendar calendar)
     : VisitFormPage(validator, form)
 {
     public const string ConflictMessage =
@@ -55,7 +55,7 @@ public sealed class EditModel(IValidator<VisitInput> validator, VisitFormHandler
             // Keep everything typed; take the saved version so that a second Save deliberately keeps this one.
             ModelState.Remove($"{nameof(Input)}.{nameof(VisitInput.Version)}");
             Input.Version = result.CurrentVersion;
-            var when = result.ChangedAtUtc?.ToString("HH:mm 'UTC'", CultureInfo.InvariantCulture);
+            var when = result.ChangedAtUtc is { } at ? calendar.TimeOf(at) : null;
             ModelState.AddModelError(string.Empty, when is null ? ConflictMessage : $"{ConflictMessage} (Saved by the other person at {when}.)");
             await ReadBackAsync(ct).ConfigureAwait(false);
             return Page();

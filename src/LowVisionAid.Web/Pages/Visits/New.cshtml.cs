@@ -4,7 +4,7 @@ using Microsoft.AspNetCore.Mvc;
 
 namespace LowVisionAid.Web.Pages.Visits;
 
-public sealed class NewModel(IValidator<VisitInput> validator, VisitFormHandler form, NewVisitHandler handler, TimeProvider clock)
+public sealed class NewModel(IValidator<VisitInput> validator, VisitFormHandler form, NewVisitHandler handler, Infrastructure.ClinicCalendar calendar)
     : VisitFormPage(validator, form)
 {
     private readonly VisitFormHandler _form = form;
@@ -19,7 +19,7 @@ public sealed class NewModel(IValidator<VisitInput> validator, VisitFormHandler 
             return NotFound();
         }
 
-        Input.VisitDate = DateOnly.FromDateTime(clock.GetLocalNow().DateTime).ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
+        Input.VisitDate = calendar.Today.ToString("yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture);
         return Page();
     }
 

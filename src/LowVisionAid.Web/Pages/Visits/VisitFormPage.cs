@@ -20,7 +20,7 @@ public abstract class VisitFormPage(IValidator<VisitInput> validator, VisitFormH
     public IReadOnlyList<UnderstoodReading> Readings { get; private set; } = [];
 
     public static IReadOnlyList<SelectListItem> TaskChoices { get; } =
-        [new SelectListItem("No task on this line", ""), .. Labels.Choices<GoalTask>(Labels.Task)];
+        [new SelectListItem("No task on this line", ""), .. Labels.Choices<GoalTask>(Web.Plans.PlanText.Task)];
 
     public static IReadOnlyList<SelectListItem> EyeChoices { get; } = Labels.Choices<UsefulEyes>(Labels.Eyes);
 

@@ -102,7 +102,7 @@ public sealed class VisitDetailsHandler(ClinicDbContext db, VisitFormHandler for
         return new VisitView(
             visit.Id, new VisitClient(client.Id, client.Code, client.Name), visit.VisitDate, visit.Practitioner,
             Understood.From(input, snellen),
-            [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalView(Labels.Task(g.Task), g.Detail, g.TargetText, g.ViewingDistanceText))],
+            [.. visit.Goals.OrderBy(g => g.Position).Select(g => new GoalView(Web.Plans.PlanText.Task(g.Task), g.Detail, g.TargetText, g.ViewingDistanceText))],
             [.. visit.ReadingSpeeds.OrderBy(s => s.Position).Select(s => new SpeedView(s.PrintSizeText, s.WordsPerMinute))],
             visit.ContrastSensitivityText, visit.RefractionWorn, Labels.Eyes(visit.UsefulEyes), Labels.Lighting(visit.HomeLighting),
             visit.NeedsHandsFree, visit.HasTremor, visit.AccommodationMeasured is null, visit.Notes, client.IsDemo, plans);

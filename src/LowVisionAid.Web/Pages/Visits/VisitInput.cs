@@ -112,12 +112,12 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
     public const string NearGoalDistance =
         "A viewing distance is for distance tasks such as television or a whiteboard; a near task uses the preferred working distance above. Clear this field.";
 
-    public VisitInputValidator(TimeProvider clock)
+    public VisitInputValidator(Infrastructure.ClinicCalendar calendar)
     {
-        ArgumentNullException.ThrowIfNull(clock);
+        ArgumentNullException.ThrowIfNull(calendar);
         RuleFor(v => v.VisitDate)
             .Must(d => VisitInput.TryDate(d, out _)).WithMessage("Type the visit date as year-month-day, such as 2026-03-14.")
-            .Must(d => !VisitInput.TryDate(d, out var date) || date <= DateOnly.FromDateTime(clock.GetLocalNow().DateTime).AddDays(1))
+            .Must(d => !VisitInput.TryDate(d, out var date) || date <= calendar.Today.AddDays(1))
             .WithMessage("The visit date is in the future; type the date the client was seen, such as today's.");
         RuleFor(v => v.Practitioner).MaximumLength(FieldLimits.Name).WithMessage($"Keep the practitioner's name to {FieldLimits.Name} characters or fewer.");
 

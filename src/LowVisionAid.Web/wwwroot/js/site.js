@@ -4,6 +4,20 @@
 // from it. The summary also carries autofocus, which covers a browser running without this file.
 // Following a link in the summary puts the focus in the field itself (a plain link to #id only scrolls to it) and
 // brings the field's label into view with it.
+// Printing opens every disclosure (a plan's options in full), and closing the print dialogue restores them.
+window.addEventListener("beforeprint", function () {
+    document.querySelectorAll("details:not([open])").forEach(function (d) {
+        d.setAttribute("open", "");
+        d.setAttribute("data-opened-for-print", "");
+    });
+});
+window.addEventListener("afterprint", function () {
+    document.querySelectorAll("details[data-opened-for-print]").forEach(function (d) {
+        d.removeAttribute("open");
+        d.removeAttribute("data-opened-for-print");
+    });
+});
+
 document.addEventListener("DOMContentLoaded", function () {
     var summary = document.querySelector(".error-summary");
     if (!summary) {

@@ -1,7 +1,7 @@
 using System.Net;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Reports;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 using static LowVisionAid.Web.Tests.Pages.Plans.PlanReportPagesTests;
@@ -36,8 +36,8 @@ public sealed class PlanChoiceTests
         var choice = Assert.Single(after.Choices.Options);
         Assert.Equal(0, choice.Goal);
         Assert.Equal(PlanOptionList.KitDevices, choice.List);
-        var snapshot = PlanJson.Read<PlanSnapshot>(after.OutputsJson);
-        Assert.Equal("HM-08", snapshot.Goals[0].KitDevices[choice.Index].KitCode);
+        var snapshot = PlanJson.Read<TypedPlan>(after.OutputsJson);
+        Assert.Equal("HM-08", snapshot.Goals[0].KitDevices[choice.Index].Option.KitDeviceId);
         Assert.NotNull(after.ChosenUtc);
         // The outputs stay exactly as made: same text, byte for byte, and still what the planner gives for the inputs.
         Assert.Equal(before.OutputsJson, after.OutputsJson);
@@ -84,7 +84,7 @@ public sealed class PlanChoiceTests
         var plan = await app.WithDbAsync(db => db.Plans.AsNoTracking().SingleAsync(p => p.Id == planId));
         var choice = Assert.Single(plan.Choices.Options);
         Assert.Equal(PlanOptionList.Options, choice.List);
-        Assert.Equal(Spectacles, PlanJson.Read<PlanSnapshot>(plan.OutputsJson).Goals[0].Options[choice.Index].Kind);
+        Assert.Equal(Spectacles, PlanText.Kind(PlanJson.Read<TypedPlan>(plan.OutputsJson).Goals[0].Options[choice.Index].Option.Kind));
         var text = await HandoutTextAsync(browser, planId);
         Assert.Contains(Spectacles, text, StringComparison.OrdinalIgnoreCase);
         Assert.DoesNotContain(KitMagnifier, text, StringComparison.OrdinalIgnoreCase);
@@ -156,10 +156,10 @@ public sealed class PlanChoiceTests
         Assert.All(new[] { plans[0], plans[1], plans[3] }, p => Assert.False(p.Choices.IsEmpty));
         Assert.True(plans[2].Choices.IsEmpty);
         // The first client's medication labels: the lit magnifier she has on loan.
-        var first = PlanJson.Read<PlanSnapshot>(plans[0].OutputsJson);
+        var first = PlanJson.Read<TypedPlan>(plans[0].OutputsJson);
         var labels = plans[0].Choices.ForGoal(1)!.Value;
         Assert.Equal(PlanOptionList.KitDevices, labels.List);
-        Assert.Equal("HM-12L", first.Goals[1].KitDevices[labels.Index].KitCode);
+        Assert.Equal("HM-12L", first.Goals[1].KitDevices[labels.Index].Option.KitDeviceId);
         var handout = await browser.GetAsync(new Uri($"/Plans/{plans[0].Id}/Handout", UriKind.Relative));
         Assert.Equal(ReportResult.PdfContentType, handout.Content.Headers.ContentType?.MediaType);
         var none = await browser.GetAsync(new Uri($"/Plans/{plans[2].Id}/Handout", UriKind.Relative));

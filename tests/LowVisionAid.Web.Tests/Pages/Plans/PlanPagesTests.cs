@@ -1,7 +1,7 @@
 using System.Net;
 using System.Text.Encodings.Web;
 using LowVisionAid.Optics.Planning;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 
@@ -25,9 +25,9 @@ public partial class PlanPagesTests
         // near method 4M at 40 cm for 1M at 2:1 → +20 D, EVD 5 cm (CV-08, Bailey/Lovie-Kitchin, derived, exact).
         // Methods §2.6 (corrected 2026-12-03): the +10 D threshold figure is shown for reference outside the comparison,
         // and +20 D against +20 D agree. (Before, this plan was flagged as disagreeing: the issue declares that wrong.)
-        Assert.Contains("For reference, not compared: Kestenbaum&#x27;s rule (1M at threshold) gives &#x2B;10.00 D", html, StringComparison.Ordinal);
-        Assert.Matches(@"Kestenbaum&#x27;s rule with reserve</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td>", html);
-        Assert.Matches(@"Near acuity \(equivalent viewing distance\)</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td><td data-label=""Equivalent viewing distance"">5 cm</td>", html);
+        Assert.Contains("For reference, not compared: Kestenbaum&#x27;s rule as published (1M at threshold, no reserve) gives &#x2B;10.00 D", html, StringComparison.Ordinal);
+        Assert.Matches(@"Kestenbaum&#x27;s rule, for the target print and reserve</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td>", html);
+        Assert.Matches(@"Near-acuity method \(equivalent viewing distance\)</th><td data-label=""Equivalent power"">&#x2B;20.00 D</td><td data-label=""Equivalent viewing distance"">5 cm</td>", html);
         Assert.Contains("The methods agree within 0.2 log units.", html, StringComparison.Ordinal);
         Assert.DoesNotContain("The methods disagree", html, StringComparison.Ordinal);
         // Which reserve was used, and why (fluent 2:1: Cheong, Lovie-Kitchin and Bowers 2002).

@@ -58,7 +58,7 @@ public sealed partial class PlanReportPagesTests
     }
 
     [Fact]
-    public async Task The_handout_body_is_set_in_the_embedded_hyperlegible_face_at_18_pt_or_more_on_one_to_six_pages()
+    public async Task The_handout_body_is_set_in_the_embedded_hyperlegible_face_at_the_clients_print_need()
     {
         using var app = new ClinicApp();
         using var browser = app.Browser();
@@ -66,12 +66,15 @@ public sealed partial class PlanReportPagesTests
 
         var pdf = Read(await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/Handout", UriKind.Relative)));
 
+        // The client read 1.6M at 40 cm; with the fluent reserve 2:1 (methods.md §2.3) she needs 3.2M at 40 cm, and
+        // pt = M × 1.4544 / (0.35278 × 0.496) (methods.md §1.3; 0.496 = sxHeight/unitsPerEm of the shipped face) gives
+        // 26.6 pt (derived). Before issue 11 the body was 18 pt whatever the client read; now it follows her.
         // The only smaller text is the check line, printed at the 1M target: 8.31 pt (docs/reports.md).
         var body = pdf.Letters.Where(l => !string.IsNullOrWhiteSpace(l.Value) && l.PointSize > 9).ToList();
         Assert.NotEmpty(body);
         Assert.All(body, l => Assert.Contains("AtkinsonHyperlegible", (l.FontName ?? "").Replace(" ", "", StringComparison.Ordinal), StringComparison.Ordinal));
-        Assert.All(body, l => Assert.True(l.PointSize >= 18 - 0.01, $"'{l.Value}' at {l.PointSize} pt"));
-        Assert.InRange(pdf.Pages, 1, 6);
+        Assert.All(body, l => Assert.True(l.PointSize >= 26.6 - 0.01, $"'{l.Value}' at {l.PointSize} pt"));
+        Assert.InRange(pdf.Pages, 1, 9);
     }
 
     [Fact]
@@ -85,14 +88,15 @@ public sealed partial class PlanReportPagesTests
 
         // The engine's count as the plan stored it, and the derived check value (22, see the class notes).
         var stored = await app.WithDbAsync(db => db.Plans.Where(p => p.Id == planId).Select(p => p.OutputsJson).SingleAsync());
-        var kit = Web.Pages.Plans.PlanJson.Read<Web.Pages.Plans.PlanSnapshot>(stored).Goals[0].KitDevices.Single(o => o.KitCode == "HM-08");
-        var counted = int.Parse(kit.Figures.Single(f => f.Label == "Letters in view").Value, CultureInfo.InvariantCulture);
+        var kit = Web.Plans.PlanJson.Read<Web.Plans.TypedPlan>(stored).Goals[0].KitDevices.Single(o => o.Option.KitDeviceId == "HM-08");
+        var counted = (int)Math.Round(kit.Option.CharactersInView!.Value);
         Assert.Equal(22, counted);
-        Assert.Contains(Normalise(HandoutWording.ViewText(counted, "3.5 cm (1.4 inches)", drawn: true)), pdf.Text, StringComparison.Ordinal);
+        Assert.Contains(Normalise(HandoutWording.ViewText(counted, drawn: true)), pdf.Text, StringComparison.Ordinal);
         double target = ClientHandoutRenderer.PointsFor(Optics.Quantities.PrintSize.FromM(1.0));
         var drawn = pdf.Letters.Count(l => !string.IsNullOrWhiteSpace(l.Value) && Math.Abs(l.PointSize - target) < 0.01)
             - HandoutWording.TargetSizeLine.Count(c => c != ' ');
-        Assert.Equal(counted, drawn);
+        // The window draws words with their spaces: the count is of character places, spaces left empty.
+        Assert.Equal(HandoutWording.ViewPhrase[..counted].Count(c => c != ' '), drawn);
     }
 
     [Fact]
@@ -110,7 +114,7 @@ public sealed partial class PlanReportPagesTests
         Assert.Contains(LowVisionAid.Optics.Planning.Planner.MethodVersion, pdf.Text, StringComparison.Ordinal);
         Assert.Contains("Preferred working distance", pdf.Text, StringComparison.Ordinal);
         // Table cells wrap within their column, so words of one cell may be read between other cells' words.
-        AssertWords("Kestenbaum's rule with reserve", pdf.Text);
+        AssertWords("Kestenbaum's rule, for the target print and reserve", pdf.Text);
         Assert.Contains("Field on the page", pdf.Text, StringComparison.Ordinal);
         Assert.Contains("Gives the required magnification.", pdf.Text, StringComparison.Ordinal);
         AssertWords("1M; Reads the bills now", pdf.Text);
@@ -321,7 +325,7 @@ public sealed partial class PlanReportPagesTests
     /// The clinic settings and kit (set up directly, as a clinic would have them), then a client, a visit typed into
     /// the visit form and a plan made by the visit page's plan handler. Returns the plan's id.
     /// </summary>
-    internal static async Task<int> MadePlanAsync(ClinicApp app, HttpClient browser, string code)
+    internal static async Task<int> MadePlanAsync(ClinicApp app, HttpClient browser, string code, Action<Dictionary<string, string>>? visitChanges = null)
     {
         await app.WithDbAsync(async db =>
         {
@@ -340,6 +344,7 @@ public sealed partial class PlanReportPagesTests
         visit["Input.Goals[0].Detail"] = "bills";
         visit.Remove("Input.ReadingSpeeds[0].PrintSize");
         visit.Remove("Input.ReadingSpeeds[0].WordsPerMinute");
+        visitChanges?.Invoke(visit);
         var created = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", visit);
         Assert.Equal(HttpStatusCode.Redirect, created.StatusCode);
         var visitUrl = created.Headers.Location!.OriginalString;
@@ -440,7 +445,7 @@ public sealed partial class PlanReportPagesTests
     [GeneratedRegex("<svg class=\"check-word\"[^>]*><text [^>]*font-size=\"([0-9.]+)\"[^>]*>([^<]*)</text>")]
     private static partial Regex CheckWords();
 
-    [GeneratedRegex("<article class=\"option\".*?</article>", RegexOptions.Singleline)]
+    [GeneratedRegex("<details class=\"option\".*?</details>", RegexOptions.Singleline)]
     private static partial Regex Cards();
 
     [GeneratedRegex("<form [^>]*action=\"([^\"]*)\"")]

@@ -1,7 +1,7 @@
 using System.Net;
 using System.Net.Http.Json;
 using LowVisionAid.Web.Calculator;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 
@@ -34,12 +34,12 @@ public sealed class SameTaskSamePowerTests
         var planned = await browser.SubmitAsync(visitUrl, new Dictionary<string, string>(), visitUrl + "?handler=Plan");
         Assert.Equal(HttpStatusCode.Redirect, planned.StatusCode);
         var stored = await app.WithDbAsync(db => db.Plans.SingleAsync());
-        var snapshot = PlanJson.Read<PlanSnapshot>(stored.OutputsJson);
-        Assert.All(snapshot.Goals, g =>
+        var typed = PlanJson.Read<TypedPlan>(stored.OutputsJson);
+        Assert.All(typed.Goals, g =>
         {
-            Assert.Equal("+32.00 D", g.RequiredPower);
-            Assert.Equal("2:1", g.Reserve);
-            Assert.Contains("Cheong, Lovie-Kitchin and Bowers 2002", g.ReserveWhy, StringComparison.Ordinal);
+            Assert.Equal(32.0, g.RequiredPower!.Value.Dioptres, 9);
+            Assert.Equal(2.0, g.Reserve!.Reserve.Ratio, 9);
+            Assert.Contains("Cheong, Lovie-Kitchin and Bowers 2002", g.Reserve.Why, StringComparison.Ordinal);
         });
 
         // The quick calculator page, with the usual reserve for the task.

@@ -1,7 +1,7 @@
 using System.Net;
 using LowVisionAid.Optics.Options;
 using LowVisionAid.TestSupport;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 
@@ -35,7 +35,7 @@ public sealed class CostClassSettingsTests
 
         // With the core's defaults (spectacle add medium; hand and stand magnifiers low) the add comes after both lenses.
         var before = await PlanAsync(app, browser, visitUrl);
-        Assert.Equal("+10.00 D", before.RequiredPower);
+        Assert.Equal("+10.00 D", PlanText.Power(before.RequiredPower!.Value));
         Assert.True(Position(before, OptionKind.SpectacleAdd) > Position(before, OptionKind.HandMagnifier));
         Assert.True(Position(before, OptionKind.SpectacleAdd) > Position(before, OptionKind.StandMagnifier));
         Assert.Contains("Costs more.", Reasons(before, OptionKind.SpectacleAdd));
@@ -77,19 +77,19 @@ public sealed class CostClassSettingsTests
         Assert.Empty((await app.WithDbAsync(db => db.Settings.SingleAsync())).CostClasses);
     }
 
-    private static async Task<GoalPlan> PlanAsync(ClinicApp app, HttpClient browser, string visitUrl)
+    private static async Task<PlannedGoal> PlanAsync(ClinicApp app, HttpClient browser, string visitUrl)
     {
         var planned = await browser.SubmitAsync(visitUrl, new Dictionary<string, string>(), visitUrl + "?handler=Plan");
         Assert.Equal(HttpStatusCode.Redirect, planned.StatusCode);
         var plan = await app.WithDbAsync(db => db.Plans.OrderByDescending(p => p.Id).FirstAsync());
-        return Assert.Single(PlanJson.Read<PlanSnapshot>(plan.OutputsJson).Goals);
+        return Assert.Single(PlanJson.Read<TypedPlan>(plan.OutputsJson).Goals);
     }
 
-    private static int Position(GoalPlan goal, OptionKind kind) =>
-        Assert.Single(goal.Options, o => o.Kind == PlanBuilder.KindLabel(kind) && o.KitCode is null).Position;
+    private static int Position(PlannedGoal goal, OptionKind kind) =>
+        Assert.Single(goal.Options, o => o.Option.Kind == kind && o.Option.KitDeviceId is null).Position;
 
-    private static List<string> Reasons(GoalPlan goal, OptionKind kind) =>
-        [.. Assert.Single(goal.Options, o => o.Kind == PlanBuilder.KindLabel(kind) && o.KitCode is null).Reasons.Select(r => r.Text)];
+    private static List<string> Reasons(PlannedGoal goal, OptionKind kind) =>
+        [.. Assert.Single(goal.Options, o => o.Option.Kind == kind && o.Option.KitDeviceId is null).Reasons.Select(r => r.Text)];
 
     // The select that goes with the hidden field naming the kind, e.g. Input.Costs[4].Kind = SpectacleAdd → Input.Costs[4].Cost.
     private static string CostField(string html, OptionKind kind)

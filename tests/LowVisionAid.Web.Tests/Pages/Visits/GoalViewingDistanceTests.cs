@@ -1,5 +1,7 @@
 using System.Net;
-using LowVisionAid.Web.Pages.Plans;
+using LowVisionAid.Optics.Options;
+using LowVisionAid.Web.Infrastructure;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Pages.Visits;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
@@ -12,7 +14,7 @@ namespace LowVisionAid.Web.Tests.Pages.Visits;
 /// </summary>
 public sealed class GoalViewingDistanceTests
 {
-    private static readonly VisitInputValidator Validator = new(new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero)));
+    private static readonly VisitInputValidator Validator = new(new ClinicCalendar(new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero)), TimeZoneInfo.Utc));
 
     private static VisitInput Whiteboard(string viewingDistance) => new VisitInput
     {
@@ -91,18 +93,21 @@ public sealed class GoalViewingDistanceTests
         var stored = await app.WithDbAsync(db => db.Plans.SingleAsync());
         var inputs = PlanJson.Read<PlanInputs>(stored.InputsJson);
         Assert.Equal(8.0, Assert.Single(inputs.Goals).ViewingDistanceMetres!.Value, 9);
-        var snapshot = PlanJson.Read<PlanSnapshot>(stored.OutputsJson);
-        Assert.DoesNotContain(snapshot.Assumptions, a => a.Contains("assumed viewing distance", StringComparison.Ordinal));
-        var plan = Assert.Single(snapshot.Goals);
-        Assert.Equal("Whiteboard or board (maths lessons) at 8 m", plan.Title);
+        var typed = PlanJson.Read<TypedPlan>(stored.OutputsJson);
+        Assert.DoesNotContain(PlanText.Assumptions(typed), a => a.Contains("assumed viewing distance", StringComparison.Ordinal));
+        var plan = Assert.Single(typed.Goals);
+        Assert.Equal("Whiteboard or board (maths lessons) at 8 m", PlanText.GoalTitle(plan, typed.Imperial));
 
         // Derived (methods §2.7, relative distance: M = old distance ÷ new distance): 6/60 to 6/12 needs 60 / 12 = 5×;
         // from 8 m she must sit at 8 / 5 = 1.6 m (at the assumed 4 m it would be 0.8 m).
-        var closer = Assert.Single(plan.Options, o => o.Kind == PlanBuilder.KindLabel(Optics.Options.OptionKind.MovingCloser));
-        Assert.Equal("160 cm", Assert.Single(closer.Figures, f => f.Label == "Working distance").Value);
+        var closer = Assert.Single(plan.Options, o => o.Option.Kind == OptionKind.MovingCloser).Option;
+        Assert.Equal(1.6, closer.WorkingDistance.Metres, 9);
+        Assert.Equal("160 cm", Assert.Single(PlanText.Figures(closer, typed.Imperial), f => f.Label == "Working distance").Value);
         // A telescope's magnification is the same 5× at any distance (methods §3.5: M = acuity now ÷ acuity wanted).
-        var telescope = plan.Options.First(o => o.Kind == PlanBuilder.KindLabel(Optics.Options.OptionKind.DistanceTelescope)
-            || o.Kind == PlanBuilder.KindLabel(Optics.Options.OptionKind.SpectacleTelescope));
-        Assert.Contains("(5× needed)", Assert.Single(telescope.Figures, f => f.Label == "Magnification").Value, StringComparison.Ordinal);
+        var telescope = plan.Options.First(o => o.Option.Kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope).Option;
+        Assert.Contains("(5× needed)", Assert.Single(PlanText.Figures(telescope, typed.Imperial), f => f.Label == "Magnification").Value, StringComparison.Ordinal);
+        // The plan page names the distance in the goal's heading.
+        var planPage = await browser.GetStringAsync(new Uri($"/Plans/{stored.Id}", UriKind.Relative));
+        Assert.Contains("Whiteboard or board (maths lessons) at 8 m", planPage, StringComparison.Ordinal);
     }
 }

@@ -5,7 +5,7 @@ namespace LowVisionAid.Web.Tests.Pages.Visits;
 
 public class VisitInputValidatorTests
 {
-    private static readonly VisitInputValidator Validator = new(new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero)));
+    private static readonly VisitInputValidator Validator = new(new Web.Infrastructure.ClinicCalendar(new FixedClock(new DateTimeOffset(2026, 6, 1, 12, 0, 0, TimeSpan.Zero))));
 
     private static VisitInput Valid() => new VisitInput
     {

@@ -9,7 +9,7 @@ using CoreKitDevice = LowVisionAid.Optics.Kit.KitDevice;
 using DeviceKind = LowVisionAid.Optics.Kit.DeviceKind;
 using KitLabel = LowVisionAid.Optics.Kit.KitLabel;
 
-namespace LowVisionAid.Web.Pages.Plans;
+namespace LowVisionAid.Web.Plans;
 
 /// <summary>
 /// Everything a saved plan was made from, in plain numbers (metres, dioptres, logMAR, M), so it serialises exactly
@@ -106,7 +106,7 @@ public sealed record PlanInputs
                 Reserves = new ReserveRatios
                 {
                     Spot = Ratio(SpotReserve, AcuityReserve.Spot),
-                    Fluent = Ratio(FluentReserve, AcuityReserve.Fluent),
+                    Fluent = FluentReserveUsed(),
                     Sustained = Ratio(SustainedReserve, AcuityReserve.Sustained),
                 },
                 Ranges = CostClasses is { Count: > 0 } costs ? PlanSettings.Default.Ranges.WithCosts(costs) : PlanSettings.Default.Ranges,
@@ -125,6 +125,9 @@ public sealed record PlanInputs
     }
 
     // A clinic setting outside 1:1 to 10:1 cannot come from the settings form; the documented default stands in for it.
+    /// <summary>The fluent reserve the clinic used (2:1 when none was stored), as the planner reads it.</summary>
+    public AcuityReserve FluentReserveUsed() => Ratio(FluentReserve, AcuityReserve.Fluent);
+
     private static AcuityReserve Ratio(double ratio, AcuityReserve fallback) =>
         ratio is >= 1 and <= AcuityReserve.MaximumRatio ? AcuityReserve.FromRatio(ratio) : fallback;
 }

@@ -1,26 +1,10 @@
-using System.Text.Json;
-using System.Text.Json.Serialization;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Optics.Planning;
 using Microsoft.EntityFrameworkCore;
 
-namespace LowVisionAid.Web.Pages.Plans;
-
-/// <summary>The one way plans are written to and read from their JSON columns.</summary>
-public static class PlanJson
-{
-    public static JsonSerializerOptions Options { get; } = new()
-    {
-        WriteIndented = false,
-        Converters = { new JsonStringEnumConverter() },
-    };
-
-    public static string Write<T>(T value) => JsonSerializer.Serialize(value, Options);
-
-    public static T Read<T>(string json) => JsonSerializer.Deserialize<T>(json, Options)
-        ?? throw new InvalidOperationException("A saved plan could not be read.");
-}
+namespace LowVisionAid.Web.Plans;
 
 public sealed record MakePlanResult(int? PlanId, string? Problem);
 
@@ -48,14 +32,14 @@ public sealed class MakePlanHandler(ClinicDbContext db, TimeProvider clock)
             return new(null, NoWorkingDistance);
         }
 
-        var snapshot = PlanBuilder.Build(inputs);
+        var outputs = PlanBuilder.Build(inputs);
         var plan = new Plan
         {
             VisitId = visitId,
             CreatedUtc = clock.GetUtcNow().UtcDateTime,
-            MethodVersion = snapshot.MethodVersion,
+            MethodVersion = outputs.MethodVersion,
             InputsJson = PlanJson.Write(inputs),
-            OutputsJson = PlanJson.Write(snapshot),
+            OutputsJson = PlanJson.Write(outputs),
         };
         db.Plans.Add(plan);
         await db.SaveChangesAsync(ct).ConfigureAwait(false);
@@ -130,7 +114,7 @@ public sealed class ChoosePlanOptionHandler(ClinicDbContext db, TimeProvider clo
             return (false, null);
         }
 
-        if (!Exists(PlanJson.Read<PlanSnapshot>(plan.OutputsJson), option))
+        if (!Exists(LegacyPlanReader.Read(plan), option))
         {
             return (true, NoSuchOption);
         }
@@ -164,32 +148,26 @@ public sealed class ChoosePlanOptionHandler(ClinicDbContext db, TimeProvider clo
         return true;
     }
 
-    public static bool Exists(PlanSnapshot snapshot, PlanOptionRef option)
+    public static bool Exists(TypedPlan plan, PlanOptionRef option)
     {
-        ArgumentNullException.ThrowIfNull(snapshot);
-        if (option.Goal < 0 || option.Goal >= snapshot.Goals.Count || option.Index < 0)
-        {
-            return false;
-        }
-
-        var goal = snapshot.Goals[option.Goal];
-        var list = option.List == PlanOptionList.KitDevices ? goal.KitDevices : goal.Options;
-        return option.Index < list.Count;
+        ArgumentNullException.ThrowIfNull(plan);
+        return option.Goal >= 0 && option.Goal < plan.Goals.Length && option.Index >= 0
+            && option.Index < plan.Goals[option.Goal].List(option.List).Length;
     }
 }
 
 public sealed record PlanTrialRow(int Id, DateOnly Date, string Device, string Outcome, string FollowUp, string? Result, string? Comment);
 
 public sealed record PlanView(
-    int Id, int VisitId, DateOnly VisitDate, int ClientId, string ClientCode, bool IsDemo, DateTime CreatedUtc,
-    PlanSnapshot Snapshot, IReadOnlyList<PlanTrialRow> Trials, PlanChoices Choices);
+    int Id, int VisitId, DateOnly VisitDate, int ClientId, string ClientCode, bool IsDemo, DateTimeOffset Created,
+    TypedPlan Outputs, IReadOnlyList<PlanTrialRow> Trials, PlanChoices Choices);
 
-public sealed class PlanDetailsHandler(ClinicDbContext db)
+public sealed class PlanDetailsHandler(ClinicDbContext db, ClinicCalendar calendar)
 {
     public async Task<PlanView?> HandleAsync(int id, CancellationToken ct)
     {
         var plan = await db.Plans.AsNoTracking().Where(p => p.Id == id)
-            .Select(p => new { p.Id, p.VisitId, p.Visit!.VisitDate, p.Visit.ClientId, p.Visit.Client!.Code, p.Visit.Client.IsDemo, p.CreatedUtc, p.OutputsJson, p.Choices })
+            .Select(p => new { p.Id, p.VisitId, p.Visit!.VisitDate, p.Visit.ClientId, p.Visit.Client!.Code, p.Visit.Client.IsDemo, p.CreatedUtc, p.MethodVersion, p.InputsJson, p.OutputsJson, p.Choices })
             .FirstOrDefaultAsync(ct).ConfigureAwait(false);
         if (plan is null)
         {
@@ -198,8 +176,8 @@ public sealed class PlanDetailsHandler(ClinicDbContext db)
 
         var trials = await db.Trials.AsNoTracking().Where(t => t.PlanId == id).OrderBy(t => t.TrialDate).ThenBy(t => t.Id)
             .ToListAsync(ct).ConfigureAwait(false);
-        return new PlanView(plan.Id, plan.VisitId, plan.VisitDate, plan.ClientId, plan.Code, plan.IsDemo, plan.CreatedUtc,
-            PlanJson.Read<PlanSnapshot>(plan.OutputsJson),
+        return new PlanView(plan.Id, plan.VisitId, plan.VisitDate, plan.ClientId, plan.Code, plan.IsDemo, calendar.Local(plan.CreatedUtc),
+            LegacyPlanReader.Read(plan.OutputsJson, plan.InputsJson, plan.MethodVersion),
             [.. trials.Select(t => new PlanTrialRow(t.Id, t.TrialDate, t.DeviceDescription, Labels.Outcome(t.Outcome), Labels.FollowUp(t.FollowUpDue, t.FollowUpDone), t.ResultText, t.ClientComment))],
             plan.Choices);
     }
