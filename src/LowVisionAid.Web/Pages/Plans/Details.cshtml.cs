@@ -18,7 +18,10 @@ public sealed class DetailsModel(PlanDetailsHandler handler, ChoosePlanOptionHan
     /// <summary>When the plan was made, in the clinic's time zone.</summary>
     public string Made => calendar.DateAndTime(Plan.Created.UtcDateTime);
 
-    /// <summary>The cautions every planned goal carries, shown once above the goals.</summary>
+    /// <summary>The caution that every figure is a starting point: the lead of the cautions box, whatever was planned.</summary>
+    public string StartingPoint => Caution.StartingPoint.Text;
+
+    /// <summary>The cautions every planned goal carries, shown once above the goals (the starting point leads the box).</summary>
     public IReadOnlyList<Caution> CommonCautions { get; private set; } = [];
 
     public async Task<IActionResult> OnGetAsync(int id, CancellationToken ct)
@@ -33,12 +36,12 @@ public sealed class DetailsModel(PlanDetailsHandler handler, ChoosePlanOptionHan
         var planned = plan.Outputs.Goals.Where(g => g.IsPlanned).ToList();
         CommonCautions = planned.Count == 0
             ? []
-            : [.. planned[0].Cautions.Where(c => planned.TrueForAll(g => g.Cautions.Contains(c)))];
+            : [.. planned[0].Cautions.Where(c => c != Caution.StartingPoint && planned.TrueForAll(g => g.Cautions.Contains(c)))];
         return Page();
     }
 
     /// <summary>The cautions of one goal that are not already shown for the whole plan.</summary>
-    public IEnumerable<Caution> OwnCautions(PlannedGoal goal) => goal.Cautions.Where(c => !CommonCautions.Contains(c));
+    public IEnumerable<Caution> OwnCautions(PlannedGoal goal) => goal.Cautions.Where(c => c != Caution.StartingPoint && !CommonCautions.Contains(c));
 
     /// <summary>Chooses one option of a goal for the handout, in place of any earlier choice for that goal.</summary>
     public async Task<IActionResult> OnPostChooseAsync(int id, int goal, PlanOptionList list, int index, CancellationToken ct)

@@ -18,6 +18,30 @@ window.addEventListener("afterprint", function () {
     });
 });
 
+// A link to a disclosure (an option's row in a plan's comparison table) opens it where it is, with any disclosure
+// around it, and puts the keyboard focus on its summary; so does arriving at the page with its address (after a
+// choice for the handout). Without this file the browser still scrolls to the closed option.
+function openDisclosure(id) {
+    var target = id && document.getElementById(id);
+    if (!target || target.tagName !== "DETAILS") {
+        return null;
+    }
+    for (var d = target; d; d = d.parentElement && d.parentElement.closest("details")) {
+        d.open = true;
+    }
+    return target;
+}
+document.addEventListener("click", function (event) {
+    var link = event.target.closest && event.target.closest("a[href^='#']");
+    var target = link && openDisclosure(decodeURIComponent(link.getAttribute("href").slice(1)));
+    if (target) {
+        setTimeout(function () { target.querySelector("summary").focus({ preventScroll: true }); }, 0);
+    }
+});
+document.addEventListener("DOMContentLoaded", function () {
+    openDisclosure(decodeURIComponent(location.hash.slice(1)));
+});
+
 document.addEventListener("DOMContentLoaded", function () {
     var summary = document.querySelector(".error-summary");
     if (!summary) {
