@@ -38,6 +38,22 @@ public class ClinicianSummaryRendererTests
     }
 
     [Fact]
+    public void A_figure_the_caller_gives_under_the_summarys_own_label_is_printed_once_in_the_callers_words()
+    {
+        var model = SampleModels.Summary();
+        var option = model.ChosenOptions[0] with
+        {
+            OtherFigures = [new OptionFigure("Working distance", "8.3 cm"), new OptionFigure("Depth of focus", "1.2 cm")],
+        };
+
+        var figures = new SummaryText().Figures(option);
+
+        Assert.Equal("8.3 cm", Assert.Single(figures, f => f.Label == "Working distance").Value);
+        Assert.Single(figures, f => f.Label == "Depth of focus");
+        Assert.Single(figures, f => f.Label == "Equivalent power");
+    }
+
+    [Fact]
     public void Prints_every_figure_and_reason_of_each_chosen_option()
     {
         var model = SampleModels.Summary();
@@ -49,7 +65,7 @@ public class ClinicianSummaryRendererTests
         // 8.3 cm = 3.27 in (1 in = 2.54 cm exactly), printed to 0.1 in.
         Assert.True(text.Contains("Working distance 8.3 cm (3.3 in)"), text.Words);
         Assert.True(text.Contains("Field on the page 55 mm"), text.Words);
-        Assert.True(text.Contains("Letters of target print in view 34"), text.Words);
+        Assert.True(text.Contains("Letters in view 34"), text.Words);
         foreach (var figure in option.OtherFigures)
             Assert.True(text.Contains(figure.Label + " " + figure.Value), figure.Label);
         foreach (var line in option.Reasons.Concat(option.Cautions))

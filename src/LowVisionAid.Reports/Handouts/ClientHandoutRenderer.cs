@@ -115,48 +115,57 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
                 List(items, numbered: false);
             }
 
-            void Contact(bool full)
+            void Contact()
             {
-                // The contact block: heading, name and every way to reach the clinic (the phone alone in the short text).
+                // The contact block: heading, name and every way to reach the clinic.
                 var contact = new List<string> { model.Clinic.Name, "Phone: " + model.Clinic.Phone };
-                if (full && !string.IsNullOrWhiteSpace(model.Clinic.Email))
+                if (!string.IsNullOrWhiteSpace(model.Clinic.Email))
                     contact.Add("Email: " + model.Clinic.Email);
-                if (full && !string.IsNullOrWhiteSpace(model.Clinic.Address))
+                if (!string.IsNullOrWhiteSpace(model.Clinic.Address))
                     contact.Add("Address: " + model.Clinic.Address);
-                Heading("Questions? Contact us", TextHeight(contact[0]));
+                Heading(HandoutWording.ContactUs, TextHeight(contact[0]));
                 foreach (var item in contact)
                     Text(item);
             }
 
             if (fit.ShortText)
             {
-                // Very large print: the essentials only; the clinician is told to offer the whole text in other forms.
-                flow.Paragraph("Your magnifier plan", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
-                Text(ClientLine(model));
-                flow.Space(gap);
-                Text(HandoutWording.ShortOtherForm);
-                foreach (var device in devices)
+                // Very large print: the essentials only (ShortHandout); the clinician is told to offer the whole text
+                // in other forms. A heading stays with the line or point after it.
+                var lines = ShortHandout.Lines(model, _culture);
+                for (int i = 0; i < lines.Count; i++)
                 {
-                    var use = "Use it for: " + device.Task;
-                    Heading("Your " + LowerFirst(device.Name), TextHeight(use));
-                    Text(use);
-                    if (DeviceWording.Setting(device.Kind, device.Screen) is { } setting)
-                        Text(setting);
-                    foreach (var distance in device.Distances)
-                        Text(distance.What + ": " + ShortLength(distance.Distance, model.Paper));
-                    if (DeviceWording.ShortGlasses(device.Kind, device.ReadingAdd, _culture) is { } glasses)
-                        Text("Glasses: " + glasses + ".");
+                    var (part, text) = lines[i];
+                    switch (part)
+                    {
+                        case ShortHandoutPart.Title:
+                            flow.Paragraph(text, title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
+                            break;
+                        case ShortHandoutPart.Gap:
+                            flow.Space(gap);
+                            break;
+                        case ShortHandoutPart.Heading:
+                            var after = lines[i + 1];
+                            Heading(text, after.Part == ShortHandoutPart.Point ? TextHeight(after.Text, body * 1.5, whole: true) : TextHeight(after.Text));
+                            break;
+                        case ShortHandoutPart.Point:
+                            var points = lines.Skip(i).TakeWhile(l => l.Part == ShortHandoutPart.Point).Select(l => l.Text).ToList();
+                            List(points, numbered: false);
+                            i += points.Count - 1;
+                            break;
+                        default:
+                            Text(text);
+                            break;
+                    }
                 }
 
-                Section("Stay safe", HandoutWording.ShortCautionsFor(devices));
-                Contact(full: false);
                 count = (flow.PageCount, flow.LastPageFill);
                 return (pageCount is null ? default : PdfOutput.Save(document), count);
             }
 
-            flow.Paragraph("Your magnifier plan", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
+            flow.Paragraph(HandoutWording.Title, title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
             flow.Paragraph(model.Clinic.Name, bold, line);
-            Text(ClientLine(model));
+            Text(ShortHandout.ClientLine(model));
             Text("Given on: " + Date(model.IssuedOn));
             Text("Next visit: " + (model.FollowUpOn is { } next ? Date(next) : "the clinic will call you to book it"));
             Text("Clinic phone: " + model.Clinic.Phone);
@@ -164,7 +173,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             foreach (var device in devices)
             {
                 var what = "What it is: " + device.WhatItIs;
-                Heading("Your " + LowerFirst(device.Name), TextHeight(what));
+                Heading(ShortHandout.DeviceHeading(device), TextHeight(what));
                 Text(what);
                 flow.Space(gap);
                 Text("Use it for: " + device.Task);
@@ -198,7 +207,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
                 }
             }
 
-            Section("Stay safe", model.CautionsToPrint);
+            Section(HandoutWording.StaySafe, model.CautionsToPrint);
             Section("Light", model.Light);
             Section("Practice", model.Practice);
             Section("Looking after it", model.CareToPrint);
@@ -215,7 +224,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
             flow.Space(gap);
             flow.Paragraph(HandoutWording.TargetSizeLine, target, checkLine);
 
-            Contact(full: true);
+            Contact();
 
             count = (flow.PageCount, flow.LastPageFill);
         }
@@ -267,28 +276,7 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
         return null;
     }
 
-    private static string ClientLine(ClientHandout model) => string.IsNullOrWhiteSpace(model.ClientName)
-        ? "Client code: " + model.ClientCode
-        : "For: " + model.ClientName + " (client code " + model.ClientCode + ")";
-
-    private static string LowerFirst(string name) =>
-        name.Length > 1 && char.IsUpper(name[0]) && !char.IsUpper(name[1]) ? char.ToLowerInvariant(name[0]) + name[1..] : name;
-
     private string Date(DateOnly date) => date.ToString("dddd d MMMM yyyy", _culture);
-
-    // The short version gives each distance in one unit, a line shorter at 48 pt: inches or feet where the clinic
-    // prints on Letter (imperial units), centimetres or metres on A4.
-    private string ShortLength(Distance distance, PaperSize paper)
-    {
-        var magnitude = distance.Abs();
-        return (paper, magnitude.Metres >= 1) switch
-        {
-            (PaperSize.Letter, true) => (magnitude.Inches / 12).ToString("0.#", _culture) + " feet",
-            (PaperSize.Letter, false) => magnitude.Inches.ToString("0.#", _culture) + " inches",
-            (_, true) => magnitude.Metres.ToString("0.#", _culture) + " m",
-            _ => magnitude.Centimetres.ToString("0.#", _culture) + " cm",
-        };
-    }
 
     private string Length(Distance distance)
     {

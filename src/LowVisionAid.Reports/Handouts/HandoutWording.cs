@@ -7,6 +7,15 @@ namespace LowVisionAid.Reports.Handouts;
 /// </summary>
 public static class HandoutWording
 {
+    /// <summary>The handout's title.</summary>
+    public const string Title = "Your magnifier plan";
+
+    /// <summary>The heading of the safety lines.</summary>
+    public const string StaySafe = "Stay safe";
+
+    /// <summary>The heading of the clinic's contact.</summary>
+    public const string ContactUs = "Questions? Contact us";
+
     /// <summary>Burning-glass risk (methods.md §7.1).</summary>
     public const string SunlightFire =
         "A magnifier left in sunlight can focus the sun and start a fire. Keep it covered, or in a drawer, away from windows, curtains and bedding.";

@@ -23,6 +23,7 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
 
     private const double Margin = 50;
     private readonly IFormatProvider _culture = formatProvider ?? CultureInfo.InvariantCulture;
+    private readonly SummaryText _text = new(formatProvider);
 
     // A last page less full than this is laid out again with tighter gaps between blocks.
     private const double NearlyEmpty = 0.2;
@@ -81,29 +82,15 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
 
             double keepWithHeight(string text) => flow.Height(text, regular, Line, BodyPoints * 1.5, whole: true);
 
-            flow.Paragraph("Magnifier plan: clinician summary", title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
-            flow.Paragraph(string.Join("  ·  ", new[] { model.Clinic.Name, model.Clinic.Phone, model.Clinic.Email, model.Clinic.Address }
-                .Where(s => !string.IsNullOrWhiteSpace(s))), regular, Line);
+            flow.Paragraph(SummaryText.Title, title, title.Size * 1.3, tag: PdfBlockLevelElementTag.Heading1);
+            flow.Paragraph(SummaryText.ClinicLine(model), regular, Line);
             flow.Space(Line * 0.3);
-            Table([0.25, 0.75], ["Record", string.Empty],
-            [
-                ["Client", string.IsNullOrWhiteSpace(model.ClientName) ? model.ClientCode : model.ClientName + " (" + model.ClientCode + ")"],
-                ["Assessed on", model.AssessedOn.ToString("d MMMM yyyy", _culture)],
-                ["Clinician", model.Clinician ?? "not recorded"],
-                ["Method version", model.MethodVersion],
-            ]);
+            Table([0.25, 0.75], ["Record", string.Empty], _text.Record(model));
 
-            if (model.Eyes is { Count: > 0 } || model.Near is not null)
+            if (_text.Acuity(model) is { Count: > 0 } acuity)
             {
                 Heading("Acuity");
-                var rows = (model.Eyes ?? []).Select(e => new[] { e.Eye + " (distance)", e.AsTyped, e.AsRead is { } a ? "logMAR " + a.LogMar.ToString("0.00", _culture) : "not a chart acuity" }).ToList();
-                if (model.Near is { } near)
-                {
-                    rows.Add(["Near (smallest print read)", near.AsTyped,
-                        near.Threshold.ToString(null, _culture) + " at " + Length(near.TestDistance) + ", logMAR " + near.Threshold.LogMarAt(near.TestDistance).ToString("0.00", _culture)]);
-                }
-
-                Table([0.3, 0.3, 0.4], ["Measured", "As typed", "As read"], rows);
+                Table([0.3, 0.3, 0.4], [.. SummaryText.AcuityColumns], acuity);
             }
 
             if (model.ReadingCurve is { } curve)
@@ -116,46 +103,32 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
             }
 
             Heading("Equivalent power by method");
-            Table([0.22, 0.15, 0.12, 0.11, 0.40], ["Method", "Power", "EVD", "Reserve", "Basis"], model.Estimates.Select(e => new[]
-            {
-                e.Method,
-                e.EquivalentPower is { } p ? p.ToString(null, _culture) : "not available",
-                e.EquivalentPower is { Dioptres: > 0 } q ? q.FocalLength.ToString(null, _culture) : "–",
-                e.Reserve is { } r ? r.ToString(null, _culture) : "none",
-                e.DisagreesWithOthers ? e.Basis + ". Differs from another estimate by more than 0.2 log units." : e.Basis,
-            }));
+            Table([0.22, 0.15, 0.12, 0.11, 0.40], [.. SummaryText.EstimateColumns], _text.Estimates(model));
 
-            Heading(model.ChosenOptions.Count == 1 ? "Chosen option" : "Chosen options");
+            Heading(SummaryText.ChosenHeading(model));
             foreach (var option in model.ChosenOptions)
             {
                 flow.Space(Line * 0.4 * spacing);
-                flow.Paragraph(option.Task is null ? option.Name : option.Name + " (for " + option.Task + ")", bold, Line,
+                flow.Paragraph(SummaryText.OptionHeading(option), bold, Line,
                     tag: PdfBlockLevelElementTag.Heading3, keepWithNext: Line * 4);
-                Table([0.35, 0.65], ["Figure", "Value"], Figures(option).Select(f => new[] { f.Label, f.Value }));
+                Table([0.35, 0.65], ["Figure", "Value"], _text.Figures(option).Select(f => new[] { f.Label, f.Value }));
                 flow.Space(Line * 0.3 * spacing);
-                Bullets("Reasons", option.WeighedReasons is { Count: > 0 } weighed
-                    ? [.. weighed.Select(r => (r.For ? "For: " : "Against: ") + r.Text)]
-                    : option.Reasons);
+                Bullets("Reasons", SummaryText.Reasons(option));
                 Bullets("Cautions", option.Cautions);
             }
 
             // What the client takes home, and what to offer besides when the print is very large.
-            if (model.HandoutReader is not null)
+            if (_text.Handout(model) is { } handout)
             {
-                var fit = Handouts.HandoutPrint.Fit(model.HandoutReader, model.HandoutMinimumPoints, _culture);
                 Heading("Client handout");
-                flow.Paragraph(fit.ClinicianNote ?? string.Create(_culture,
-                    $"Printed at {fit.BodyPoints:0} pt, at least the print the client needs ({(fit.Needed is { } m ? m.M.ToString("0.#", _culture) + "M, " : string.Empty)}{fit.NeededPoints ?? fit.BodyPoints:0} pt) and the clinic's smallest size."), regular, Line);
+                flow.Paragraph(handout, regular, Line);
             }
 
             Heading("Trials and outcomes");
             if (model.Trials.Count == 0)
                 flow.Paragraph("No trial recorded yet.", regular, Line);
             else
-                Table([0.14, 0.24, 0.2, 0.28, 0.14], ["Date", "Device", "Task", "Result", "Outcome"], model.Trials.Select(t => new[]
-                {
-                    t.Date.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture), t.Device, t.Task, t.Result, t.Outcome,
-                }));
+                Table([0.14, 0.24, 0.2, 0.28, 0.14], [.. SummaryText.TrialColumns], SummaryText.Trials(model));
 
             foreach (var figure in model.FigureTables ?? [])
             {
@@ -180,12 +153,8 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
         Action<double[], string[], IEnumerable<string[]>> table, XFont regular, double line)
     {
         heading("Reading curve", PdfBlockLevelElementTag.Heading2);
-        var points = curve.Points.Where(p => p.Print.IsValid && p.WordsPerMinute >= 0).OrderByDescending(p => p.Print.M).ToList();
-        string result = curve.CriticalPrint is { } cps && curve.MaximumReadingSpeed is { } mrs
-            ? "Critical print size " + cps.ToString(null, _culture) + " at " + Length(curve.TestDistance) + " (logMAR "
-                + cps.LogMarAt(curve.TestDistance).ToString("0.00", _culture) + "); maximum reading speed "
-                + mrs.ToString("0", _culture) + " words a minute."
-            : "No critical print size: " + (curve.Refusal ?? "the curve did not level off.");
+        var points = SummaryText.CurvePoints(curve).ToList();
+        string result = _text.CurveResult(curve);
         flow.Paragraph(result, regular, line);
         if (points.Count < 2)
             return;
@@ -194,10 +163,7 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
         var small = new XFont(HyperlegibleFont.FamilyName, 8.5, XFontStyleEx.Regular);
         flow.Figure(150, "Reading speed against print size. " + result, (g, area) => Plot(g, area, points, curve, small));
         flow.Space(line * 0.3);
-        table([0.3, 0.3, 0.4], ["Print size", "logMAR at " + Length(curve.TestDistance), "Words a minute"], points.Select(p => new[]
-        {
-            p.Print.ToString(null, _culture), p.Print.LogMarAt(curve.TestDistance).ToString("0.00", _culture), p.WordsPerMinute.ToString("0", _culture),
-        }));
+        table([0.3, 0.3, 0.4], [.. _text.CurveColumns(curve)], _text.CurveRows(curve));
     }
 
     private void Plot(XGraphics g, XRect area, List<ReadingCurvePoint> points, ReadingCurveRecord curve, XFont font)
@@ -251,24 +217,5 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
         if (string.IsNullOrWhiteSpace(model.MethodVersion))
             return ReportMessages.NoMethodVersion;
         return null;
-    }
-
-    private IEnumerable<OptionFigure> Figures(ChosenOption option)
-    {
-        yield return new OptionFigure("Kind", option.Kind);
-        yield return new OptionFigure("Equivalent power", option.EquivalentPower.ToString(null, _culture));
-        yield return new OptionFigure("Working distance", Length(option.WorkingDistance));
-        if (option.Field is { } field)
-            yield return new OptionFigure("Field on the page", field.Abs().Millimetres.ToString("0", _culture) + " mm");
-        if (option.LettersInView is { } letters)
-            yield return new OptionFigure("Letters of target print in view", letters.ToString(_culture));
-        foreach (var figure in option.OtherFigures)
-            yield return figure;
-    }
-
-    private string Length(Distance distance)
-    {
-        var magnitude = distance.Abs();
-        return magnitude.Centimetres.ToString("0.0", _culture) + " cm (" + magnitude.Inches.ToString("0.0", _culture) + " in)";
     }
 }

@@ -314,8 +314,11 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
             estimates.Add(new MethodEstimate(
                 method,
                 e.EquivalentPower,
-                $"Viewing distance {PlanText.Length(e.EquivalentViewingDistance, imperial)}; magnification {PlanText.EstimateMagnification(e, imperial)}; reserve {PlanText.EstimateReserve(e)}",
-                disagree));
+                // The reserve has its own column; one built into the reading curve (no reserve of its own) is said here.
+                $"Viewing distance {PlanText.Length(e.EquivalentViewingDistance, imperial)}; magnification {PlanText.EstimateMagnification(e, imperial)}"
+                    + (e.Reserve is null ? "; " + PlanText.EstimateReserve(e).ToLowerInvariant() : ""),
+                disagree,
+                e.Reserve));
         }
     }
 

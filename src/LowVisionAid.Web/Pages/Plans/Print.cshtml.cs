@@ -34,6 +34,21 @@ public sealed class PrintModel(PlanReports reports) : PageModel
 
     public IReadOnlyList<TradeOffFigure> Figures { get; private set; } = [];
 
+    /// <summary>The summary's words, the same as the PDF's.</summary>
+    public Reports.Summaries.SummaryText SummaryText { get; } = new();
+
+    /// <summary>The handout's body size and version for this reader, the same as the PDF's (<see cref="HandoutPrint.Fit(ClientHandout, IFormatProvider?)"/>).</summary>
+    public HandoutPrintFit? Fit { get; private set; }
+
+    /// <summary>The body's classes: the handout's, with its size in whole points (print.css has one rule a point).</summary>
+    public string BodyClass => !IsForClient || Fit is null
+        ? (IsForClient ? "print-client" : "print-clinician")
+        : string.Create(System.Globalization.CultureInfo.InvariantCulture,
+            $"print-client body-{Math.Clamp(Math.Ceiling(Fit.BodyPoints), ClientHandout.DefaultBodyPoints, ClientHandout.MaximumBodyPoints):0}{(Fit.ShortText ? " short-text" : "")}");
+
+    /// <summary>The short handout's lines (very large print), a list's points gathered under one entry.</summary>
+    public IReadOnlyList<(ShortHandoutPart Part, IReadOnlyList<string> Texts)> ShortBlocks { get; private set; } = [];
+
     /// <summary>The check line's size in points, from the handout's target print (same conversion as the PDF).</summary>
     public double CheckLinePoints => ClientHandoutRenderer.PointsFor(Handout.TargetPrint);
 
@@ -54,9 +69,33 @@ public sealed class PrintModel(PlanReports reports) : PageModel
         }
 
         Handout = PlanReports.Handout(plan);
+        Fit = HandoutPrint.Fit(Handout, System.Globalization.CultureInfo.InvariantCulture);
+        if (Fit.ShortText)
+        {
+            ShortBlocks = Gather(ShortHandout.Lines(Handout, System.Globalization.CultureInfo.InvariantCulture));
+        }
+
         Summary = reports.Summary(plan);
         Figures = reports.Figures(plan, "print");
         return Page();
+    }
+
+    private static List<(ShortHandoutPart, IReadOnlyList<string>)> Gather(IReadOnlyList<ShortHandoutLine> lines)
+    {
+        var blocks = new List<(ShortHandoutPart Part, IReadOnlyList<string> Texts)>();
+        foreach (var (part, text) in lines)
+        {
+            if (part == ShortHandoutPart.Point && blocks.Count > 0 && blocks[^1].Part == ShortHandoutPart.Point)
+            {
+                blocks[^1] = (part, [.. blocks[^1].Texts, text]);
+            }
+            else
+            {
+                blocks.Add((part, [text]));
+            }
+        }
+
+        return blocks;
     }
 
     public static string Cm(Optics.Quantities.Distance d) =>
@@ -67,3 +106,6 @@ public sealed class PrintModel(PlanReports reports) : PageModel
 
     public static string FontFamily => HyperlegibleFont.FamilyName;
 }
+
+/// <summary>A table of the print view: its header and its rows, the first cell of each a row header.</summary>
+public sealed record PrintTable(IReadOnlyList<string> Columns, IReadOnlyList<string[]> Rows);

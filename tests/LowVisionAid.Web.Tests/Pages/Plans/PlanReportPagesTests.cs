@@ -7,6 +7,7 @@ using LowVisionAid.Reports;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Handouts;
 using LowVisionAid.Web.Handouts;
+using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 using UglyToad.PdfPig.Content;
@@ -203,6 +204,50 @@ public sealed partial class PlanReportPagesTests
     }
 
     [Fact]
+    public async Task The_client_print_view_sets_its_body_at_the_size_the_pdf_uses_for_this_reader()
+    {
+        using var app = new ClinicApp();
+        using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "P-7");
+
+        var html = WebUtility.HtmlDecode(await browser.GetStringAsync(new Uri($"/Plans/{planId}/Print?for=client", UriKind.Relative)));
+
+        // She read 1.6M at 40 cm; at the fluent reserve 2:1 (methods.md §2.3) she needs 3.2M at 40 cm, which in the
+        // handout face is 3.2 × 1.4544 / (0.35278 × 0.496) = 26.6 pt (methods.md §1.3, derived): 27 pt, the full text.
+        Assert.Contains("<body class=\"print-client body-27\">", html, StringComparison.Ordinal);
+        Assert.DoesNotContain(HandoutWording.ShortOtherForm, html, StringComparison.Ordinal);
+        Assert.DoesNotContain("For the clinician:", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task The_client_print_view_is_the_short_version_at_48_pt_when_paper_cannot_hold_the_print_she_needs()
+    {
+        using var app = new ClinicApp();
+        using var browser = app.Browser();
+        // 4M read at 40 cm: at the fluent reserve 2:1 (methods.md §2.3) she needs 8M at 40 cm, 8 × 1.4544 /
+        // (0.35278 × 0.496) = 66.5 pt (methods.md §1.3, derived), more than the 48 pt a line of words on paper holds.
+        var planId = await MadePlanAsync(app, browser, "P-8", visit => visit["Input.NearThreshold"] = "4M");
+        Assert.Equal(HttpStatusCode.Redirect, (await ChooseAsync(browser, planId, 0, PlanText.Kind(Optics.Options.OptionKind.HandMagnifier))).StatusCode);
+
+        var html = WebUtility.HtmlDecode(await browser.GetStringAsync(new Uri($"/Plans/{planId}/Print?for=client", UriKind.Relative)));
+        var pdf = Read(await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/Handout", UriKind.Relative)));
+
+        // The same version as the PDF: the short text at 48 pt, headings the body size in bold.
+        Assert.Contains("<body class=\"print-client body-48 short-text\">", html, StringComparison.Ordinal);
+        Assert.Contains(HandoutWording.ShortOtherForm, html, StringComparison.Ordinal);
+        Assert.Contains("Ask the clinic for the full sheet", pdf.Text, StringComparison.Ordinal);
+        // A lens: the one sunlight line of the short text, not the full text's list of cautions.
+        Assert.Contains(HandoutWording.ShortSun, html, StringComparison.Ordinal);
+        Assert.DoesNotContain(HandoutWording.SunlightFire, html, StringComparison.Ordinal);
+        Assert.DoesNotContain("How to use it", html, StringComparison.Ordinal);
+        // Distances in one unit (A4: centimetres), as in the PDF.
+        Assert.Matches(new Regex(@"<p>Lens to page: [0-9.]+ cm</p>"), html);
+        // The clinician is told why, on the screen only (the print tools do not print).
+        Assert.Contains("For the clinician:", html, StringComparison.Ordinal);
+        Assert.Contains("66 pt", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task The_clinician_print_view_shows_the_figures_with_their_tables_and_the_letters_the_plan_counted()
     {
         using var app = new ClinicApp();
@@ -217,6 +262,41 @@ public sealed partial class PlanReportPagesTests
         Assert.Equal(22, Regex.Count(html, "class=\"" + Reports.Figures.TradeOffFigures.LetterClass + "\""));
         Assert.Contains(LowVisionAid.Optics.Planning.Planner.MethodVersion, html, StringComparison.Ordinal);
         Assert.DoesNotContain("style=", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task The_clinician_print_view_has_the_pdfs_sections_acuity_as_typed_and_reasons_for_and_against()
+    {
+        using var app = new ClinicApp();
+        using var browser = app.Browser();
+        var planId = await ChosenPlanAsync(app, browser, "P-9");
+
+        var html = WebUtility.HtmlDecode(await browser.GetStringAsync(new Uri($"/Plans/{planId}/Print?for=clinician", UriKind.Relative)));
+        var pdf = Read(await browser.GetByteArrayAsync(new Uri($"/Plans/{planId}/Summary", UriKind.Relative)));
+
+        // Each eye as typed (Records.VisitForm: right 6/60, left 20/400; both 6/24 here) and as read: logMAR is
+        // −log10 of the decimal acuity (methods.md §1.1, Bailey & Lovie 1976): 6/60 → 1.00, 20/400 → log10 20 = 1.30,
+        // 6/24 → log10 4 = 0.60 (derived).
+        Assert.Matches(new Regex(@"<th scope=""row"">Right eye \(distance\)</th>\s*<td>6/60</td>\s*<td>logMAR 1.00</td>"), html);
+        Assert.Matches(new Regex(@"<th scope=""row"">Left eye \(distance\)</th>\s*<td>20/400</td>\s*<td>logMAR 1.30</td>"), html);
+        Assert.Matches(new Regex(@"<th scope=""row"">Both eyes \(distance\)</th>\s*<td>6/24</td>\s*<td>logMAR 0.60</td>"), html);
+        // Near: 1.6M at 40 cm is logMAR log10(1.6 / 0.4) = 0.60 (methods.md §1.2, derived).
+        Assert.Contains("1.6M at 40.0 cm (15.7 in), logMAR 0.60", html, StringComparison.Ordinal);
+        Assert.Contains("logMAR 0.60", pdf.Text, StringComparison.Ordinal);
+        // Each estimate with the reserve it used in its own column: the fluent 2:1 (methods.md §2.3) for Kestenbaum's
+        // rule for the target print, not "none" beside a basis that says 2:1.
+        Assert.Matches(new Regex(@"<th scope=""row"">Kestenbaum's rule, for the target print and reserve</th>\s*<td>[^<]+</td>\s*<td>[^<]+</td>\s*<td>2:1</td>"), html);
+        Assert.DoesNotContain("; reserve 2:1", html, StringComparison.Ordinal);
+        // The sections in the PDF's words, and every reason labelled for or against, as in the PDF.
+        foreach (var heading in new[] { "Acuity", "Equivalent power by method", "Chosen option", "Trials and outcomes" })
+        {
+            Assert.Contains($"<h2>{heading}</h2>", html, StringComparison.Ordinal);
+            Assert.Contains(heading, pdf.Text, StringComparison.Ordinal);
+        }
+
+        var reasons = Regex.Matches(html, "<h4>Reasons</h4><ul>(.*?)</ul>", RegexOptions.Singleline).Select(m => m.Groups[1].Value).ToList();
+        Assert.NotEmpty(reasons);
+        Assert.All(Regex.Matches(string.Concat(reasons), "<li>(.*?)</li>"), li => Assert.Matches("^(For|Against): ", li.Groups[1].Value));
     }
 
     [Fact]
