@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text.RegularExpressions;
 using LowVisionAid.Optics.Text;
 
@@ -21,21 +20,8 @@ public static partial class ContrastSensitivityNotation
     /// Parses a log contrast sensitivity. Never throws. "." and "," are both decimal marks (the values have no
     /// thousands), so <paramref name="provider"/> changes nothing today; it is taken for symmetry with the other notations.
     /// </summary>
-    public static ParseResult<double> Parse(string? text, IFormatProvider? provider)
-    {
-        var normalised = NotationText.Normalise(text, out var error, ParseMessages.ContrastSensitivityExpected);
-        if (normalised is null)
-        {
-            return ParseResult.Fail<double>(error!);
-        }
-
-        var match = LogCsPattern().Match(normalised);
-        return match.Success
-            && double.TryParse(match.Groups["v"].Value.Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture, out var logCs)
-            && logCs is >= MinimumLogCs and <= MaximumLogCs
-                ? ParseResult.Ok(logCs)
-                : ParseResult.Fail<double>(ParseMessages.ContrastSensitivityExpected);
-    }
+    public static ParseResult<double> Parse(string? text, IFormatProvider? provider) =>
+        NotationText.NumberInRange(text, LogCsPattern(), MinimumLogCs, MaximumLogCs, ParseMessages.ContrastSensitivityExpected);
 
     [GeneratedRegex(@"^(?<v>[0-9]+(?:[.,][0-9]+)?)\s*(?:log\s*cs)?$", RegexOptions.CultureInvariant)]
     private static partial Regex LogCsPattern();

@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text.RegularExpressions;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Optics.Text;
@@ -21,21 +20,8 @@ public static partial class PowerNotation
     /// Parses a power in dioptres. Never throws. "." and "," are both decimal marks (a power has no thousands),
     /// so <paramref name="provider"/> changes nothing today; it is taken for symmetry with the other notations.
     /// </summary>
-    public static ParseResult<Power> Parse(string? text, IFormatProvider? provider)
-    {
-        var normalised = NotationText.Normalise(text, out var error, ParseMessages.PowerExpected);
-        if (normalised is null)
-        {
-            return ParseResult.Fail<Power>(error!);
-        }
-
-        var match = PowerPattern().Match(normalised);
-        return match.Success
-            && double.TryParse(match.Groups["v"].Value.Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture, out var dioptres)
-            && dioptres is >= MinimumDioptres and <= MaximumDioptres
-                ? ParseResult.Ok(Power.FromDioptres(dioptres))
-                : ParseResult.Fail<Power>(ParseMessages.PowerExpected);
-    }
+    public static ParseResult<Power> Parse(string? text, IFormatProvider? provider) =>
+        NotationText.NumberInRange(text, PowerPattern(), MinimumDioptres, MaximumDioptres, ParseMessages.PowerExpected).Map(Power.FromDioptres);
 
     /// <summary>Parses a power; false when the text is not one (see <see cref="Parse"/> for the message).</summary>
     public static bool TryParse(string? text, IFormatProvider? provider, out Power power) =>

@@ -192,4 +192,10 @@ public static class ParseMessages
     /// <summary>Empty or unreadable log contrast sensitivity, or one outside 0 to 2.4.</summary>
     public const string ContrastSensitivityExpected =
         "Type contrast sensitivity in log units between 0 and 2.4, such as 1.05 logCS.";
+
+    // ---- Acuity reserve ---------------------------------------------------------------------------------------
+
+    /// <summary>Empty or unreadable reserve, or one outside 1:1 to 10:1.</summary>
+    public const string AcuityReserveExpected =
+        "Type the reserve as a ratio from 1:1 to 10:1, such as 2:1.";
 }
