@@ -4,7 +4,6 @@ using CsCheck;
 using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Text;
 using LowVisionAid.Reliability.Tests.Support;
-using LowVisionAid.Web.Infrastructure;
 using Microsoft.Extensions.Logging;
 using Xunit.Abstractions;
 
@@ -22,7 +21,7 @@ public sealed class BadInputTests(ITestOutputHelper output)
 
     private static readonly IFormatProvider[] Cultures = [CultureInfo.InvariantCulture, CultureInfo.GetCultureInfo("fr-FR"), CultureInfo.GetCultureInfo("ar-SA")];
 
-    public static TheoryData<string> Parsers() => ["distance acuity", "near acuity", "print size", "distance", "non-chart vision", "power (web)", "contrast (web)", "near acuity (web)"];
+    public static TheoryData<string> Parsers() => ["distance acuity", "near acuity", "print size", "distance", "non-chart vision", "power", "contrast sensitivity", "near acuity from two fields"];
 
     [Trait("Category", "Slow")]
     [Theory]
@@ -174,9 +173,9 @@ public sealed class BadInputTests(ITestOutputHelper output)
         "print size" => Check(PrintSizeNotation.Parse(text, culture), p => double.IsFinite(p.M) && p.M > 0),
         "distance" => Check(DistanceNotation.Parse(text, culture), d => double.IsFinite(d.Metres) && d.Metres > 0),
         "non-chart vision" => Check(NonChartVisionNotation.Parse(text, culture), v => v.ToString() is { Length: > 0 }),
-        "power (web)" => Check(Readings.Power(text), p => double.IsFinite(p.Dioptres)),
-        "contrast (web)" => Check(Readings.LogContrastSensitivity(text), double.IsFinite),
-        "near acuity (web)" => Check(Readings.NearAcuity(text, text), n => n.ToString() is { Length: > 0 }),
+        "power" => Check(PowerNotation.Parse(text, culture), p => double.IsFinite(p.Dioptres)),
+        "contrast sensitivity" => Check(ContrastSensitivityNotation.Parse(text, culture), double.IsFinite),
+        "near acuity from two fields" => Check(NearAcuityNotation.FromParts(text, text, culture), n => n.ToString() is { Length: > 0 }),
         _ => throw new ArgumentOutOfRangeException(nameof(parser), parser, "Unknown parser."),
     };
 

@@ -107,6 +107,24 @@ public static partial class DistanceAcuityNotation
         Parse(text, provider).TryGetValue(out acuity);
 
     /// <summary>
+    /// A recorded vision level: a chart acuity (its value), or counting fingers, hand movements, light perception or
+    /// no light perception (recognised, with no value: never used in a calculation). Never throws; fails with the
+    /// chart acuity's message when the text is neither.
+    /// </summary>
+    public static ParseResult<Acuity?> ParseRecordedVision(string? text, IFormatProvider? provider)
+    {
+        var acuity = Parse(text, provider);
+        if (acuity.Success)
+        {
+            return ParseResult.Ok<Acuity?>(acuity.Value, acuity.Warning);
+        }
+
+        return NonChartVisionNotation.Parse(text, provider).Success
+            ? ParseResult.Ok<Acuity?>(null)
+            : ParseResult.Fail<Acuity?>(acuity.Error);
+    }
+
+    /// <summary>
     /// Letter-by-letter scoring (Bailey–Lovie and ETDRS charts; methods §1.1):
     /// logMAR = top line attempted + 0.1 − (0.1 / letters a line) × letters read correctly from that line down,
     /// which is 0.02 a letter on a 5-letter line. Fails with a message when a number is out of range.

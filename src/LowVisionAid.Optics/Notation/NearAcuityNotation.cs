@@ -119,6 +119,19 @@ public static partial class NearAcuityNotation
         return result.TryGetValue(out nearAcuity);
     }
 
+    /// <summary>
+    /// Reads a near acuity typed in two fields, the smallest print read and the test distance, and checks them
+    /// together. Never throws; fails with the print size's message first, then the distance's, then the range's.
+    /// </summary>
+    public static ParseResult<NearAcuity> FromParts(string? threshold, string? testDistance, IFormatProvider? provider)
+    {
+        var size = PrintSizeNotation.Parse(threshold, provider);
+        var distance = DistanceNotation.Parse(testDistance, provider);
+        return size.Success && distance.Success
+            ? FromMeasurement(size.Value, distance.Value)
+            : ParseResult.Fail<NearAcuity>(size.Error ?? distance.Error!);
+    }
+
     /// <summary>Checks a measurement entered as numbers, with the same messages as <see cref="Parse(string?, IFormatProvider?, XHeightRatio)"/>.</summary>
     public static ParseResult<NearAcuity> FromMeasurement(PrintSize threshold, Distance testDistance)
     {

@@ -125,6 +125,28 @@ internal static partial class NotationText
         return true;
     }
 
+    /// <summary>
+    /// Reads an entry that is one number (the pattern's group "v", "." or "," as the decimal mark) with an optional
+    /// unit word, between <paramref name="minimum"/> and <paramref name="maximum"/>. Every failure gives
+    /// <paramref name="expected"/> (the family's message), an over-long entry <see cref="ParseMessages.TooLong"/> of it. For notations whose numbers have no
+    /// thousands (powers, log units, ratios), so no separator can be ambiguous.
+    /// </summary>
+    public static ParseResult<double> NumberInRange(string? text, Regex pattern, double minimum, double maximum, string expected)
+    {
+        var normalised = Normalise(text, out var error, expected);
+        if (normalised is null)
+        {
+            return ParseResult.Fail<double>(error!);
+        }
+
+        var match = pattern.Match(normalised);
+        return match.Success
+            && double.TryParse(match.Groups["v"].Value.Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture, out var value)
+            && value >= minimum && value <= maximum
+                ? ParseResult.Ok(value)
+                : ParseResult.Fail<double>(expected);
+    }
+
     /// <summary>Formats a number for a message or a label with the caller's culture.</summary>
     public static string Show(double value, string format, IFormatProvider? provider) => value.ToString(format, provider);
 

@@ -152,6 +152,6 @@ public sealed record DeviceRanges
     /// <paramref name="needed"/> would be needed; the strongest usually made is about <paramref name="strongest"/>".
     /// </summary>
     internal static string? Beyond(string device, double needed, double strongest, string unit) => needed > strongest * (1 + 1e-9)
-        ? string.Format(System.Globalization.CultureInfo.InvariantCulture, Texts.BeyondRangeFormat, device, needed, unit, strongest)
+        ? string.Format(System.Globalization.CultureInfo.InvariantCulture, OptionNotes.BeyondRangeFormat, device, needed, unit, strongest)
         : null;
 }

@@ -205,9 +205,9 @@ public abstract record MagnifierOption
     /// realistic range says so rather than describing a device that cannot be made.
     /// </summary>
     public string Summary(IFormatProvider provider) => !IsApplicable && NotApplicableBecause is { } why
-        ? Texts.NotNeededPrefix + why
+        ? OptionNotes.NotNeededPrefix + why
         : BeyondRange && PracticalNote is { } note
-            ? Texts.NotPracticalPrefix + note
+            ? OptionNotes.NotPracticalPrefix + note
             : Describe(provider);
 
     /// <summary>True when the device this option needs is beyond its class's realistic range (<see cref="DeviceRanges"/>).</summary>

@@ -70,7 +70,7 @@ public sealed record ScreenMagnificationOption : MagnifierOption
         var xPixels = ScreenText.XHeightPixels(angle);
         var reversed = context.WantsLight;
         var beyond = perLine < context.Ranges.FewestLettersPerScreenLine
-            ? string.Format(CultureInfo.InvariantCulture, Texts.ScreenBeyondRangeFormat, ratio * 100)
+            ? string.Format(CultureInfo.InvariantCulture, OptionNotes.ScreenBeyondRangeFormat, ratio * 100)
             : null;
         var delivered = ratio / d;
         return new ScreenMagnificationOption
@@ -87,10 +87,10 @@ public sealed record ScreenMagnificationOption : MagnifierOption
             DepthOfField = context.DepthOfField(1.0 / d),
             Binocular = context.TwoEyes ? context.BothEyesAt(OptionContext.Metres(d)) : BinocularUse.OneEye,
             AccommodationOrAddNeeded = OptionContext.Dioptres(context.AddNeededAt(1.0 / d)),
-            LightAndContrast = reversed ? Texts.LightScreenReversed : Texts.LightScreen,
+            LightAndContrast = reversed ? OptionNotes.LightScreenReversed : OptionNotes.LightScreen,
             HandsFree = screen != ScreenKind.Phone,
             SuitsTremor = true,
-            Posture = Texts.PostureScreen,
+            Posture = OptionNotes.PostureScreen,
             Fluency = context.Fluency(perLine),
             Cost = context.Ranges.CostOf(OptionKind.ScreenMagnification),
             Screen = screen,

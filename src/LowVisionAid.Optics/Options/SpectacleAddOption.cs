@@ -41,7 +41,7 @@ public sealed record SpectacleAddOption : MagnifierOption
         {
             KitDeviceId = kitId,
             IsApplicable = kitAdd is not null || needed > 0,
-            NotApplicableBecause = kitAdd is not null || needed > 0 ? null : Texts.AccommodationAloneIsEnough,
+            NotApplicableBecause = kitAdd is not null || needed > 0 ? null : OptionNotes.AccommodationAloneIsEnough,
             RequiredPower = OptionContext.Dioptres(context.Required),
             DeliveredPower = OptionContext.Dioptres(delivered),
             MeetsRequiredPower = context.Meets(delivered),
@@ -60,10 +60,10 @@ public sealed record SpectacleAddOption : MagnifierOption
                 ? context.BothEyesAt(working, SpectacleAdd.BaseInPrismEachEye(addPower))
                 : BinocularUse.OneEye,
             AccommodationOrAddNeeded = addPower,
-            LightAndContrast = Texts.LightSpectacleAdd,
+            LightAndContrast = OptionNotes.LightSpectacleAdd,
             HandsFree = true,
             SuitsTremor = true,
-            Posture = Texts.PostureSpectacleAdd,
+            Posture = OptionNotes.PostureSpectacleAdd,
             Fluency = context.Fluency(characters),
             Aberrations = AberrationNotes.For(addPower),
             Add = addPower,

@@ -25,7 +25,7 @@ public sealed record StandMagnifierOption : MagnifierOption
     public bool Illuminated { get; init; }
 
     /// <summary>Why the "×" label is not used.</summary>
-    public static string LabelWarning => Texts.StandLabelsUnreliable;
+    public static string LabelWarning => OptionNotes.StandLabelsUnreliable;
 
     /// <summary>
     /// Designs a stand for a context: with add A at eye distance z, F = (F_eq − A)/(1 − zA) and |l′| = 1/A − z
@@ -93,10 +93,10 @@ public sealed record StandMagnifierOption : MagnifierOption
             Binocular = binocular ? context.BothEyesAt(imageToEye) : BinocularUse.OneEye,
             Cost = context.Ranges.CostOf(OptionKind.StandMagnifier),
             AccommodationOrAddNeeded = view.AddNeeded,
-            LightAndContrast = Texts.LightStandMagnifier,
+            LightAndContrast = OptionNotes.LightStandMagnifier,
             HandsFree = false,
             SuitsTremor = true,
-            Posture = Texts.PostureStandMagnifier,
+            Posture = OptionNotes.PostureStandMagnifier,
             Fluency = context.Fluency(characters),
             Aberrations = AberrationNotes.For(stand.LensPower),
             Stand = stand,

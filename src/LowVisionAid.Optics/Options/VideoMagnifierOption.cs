@@ -50,7 +50,7 @@ public sealed record VideoMagnifierOption : MagnifierOption
         var add = context.AddNeededAt(1.0 / context.Preferred);
         var largest = LargestUsefulEnlargement(context, s.ScreenWidth);
         var beyond = kitMaximumEnlargement is null && needed > largest * (1 + 1e-9)
-            ? string.Format(System.Globalization.CultureInfo.InvariantCulture, Texts.VideoBeyondRangeFormat, needed, largest)
+            ? string.Format(System.Globalization.CultureInfo.InvariantCulture, OptionNotes.VideoBeyondRangeFormat, needed, largest)
             : null;
         return new VideoMagnifierOption
         {
@@ -69,10 +69,10 @@ public sealed record VideoMagnifierOption : MagnifierOption
             BeyondRange = beyond is not null,
             Cost = context.Ranges.CostOf(OptionKind.VideoMagnifier),
             AccommodationOrAddNeeded = OptionContext.Dioptres(add),
-            LightAndContrast = Texts.LightVideo,
+            LightAndContrast = OptionNotes.LightVideo,
             HandsFree = true,
             SuitsTremor = true,
-            Posture = Texts.PostureVideo,
+            Posture = OptionNotes.PostureVideo,
             Fluency = context.Fluency(perLine),
             Enlargement = enlargement,
             ViewingDistance = viewing,

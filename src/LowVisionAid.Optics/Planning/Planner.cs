@@ -196,7 +196,7 @@ public static class Planner
             }
             else
             {
-                notConsidered.Add(new(OptionKind.StandMagnifier, Texts.AddAloneIsEnough));
+                notConsidered.Add(new(OptionKind.StandMagnifier, OptionNotes.AddAloneIsEnough));
             }
 
             options.Add(NearTelescopeOption.Create(context));

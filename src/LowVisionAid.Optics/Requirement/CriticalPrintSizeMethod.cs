@@ -20,9 +20,9 @@ public static class CriticalPrintSizeMethod
     /// <exception cref="ArgumentOutOfRangeException">A print size or the test distance is not greater than zero.</exception>
     public static PowerEstimate Estimate(PrintSize criticalPrintSize, Distance testDistance, PrintSize target)
     {
-        Inputs.Print(criticalPrintSize, nameof(criticalPrintSize), "critical print size");
-        Inputs.TestDistance(testDistance, nameof(testDistance));
-        Inputs.Print(target, nameof(target), "target print size");
+        MethodInputGuards.Print(criticalPrintSize, nameof(criticalPrintSize), "critical print size");
+        MethodInputGuards.TestDistance(testDistance, nameof(testDistance));
+        MethodInputGuards.Print(target, nameof(target), "target print size");
         return Estimate(criticalPrintSize, testDistance, target, new AssumptionFacts(criticalPrintSize, testDistance));
     }
 
@@ -46,9 +46,9 @@ public static class CriticalPrintSizeMethod
             throw new ArgumentException("The reading curve could not be used: " + curve.Refusal, nameof(curve));
         }
 
-        Inputs.Print(curve.CriticalPrintSize, nameof(curve), "critical print size");
-        Inputs.TestDistance(curve.TestDistance, nameof(curve));
-        Inputs.Print(target, nameof(target), "target print size");
+        MethodInputGuards.Print(curve.CriticalPrintSize, nameof(curve), "critical print size");
+        MethodInputGuards.TestDistance(curve.TestDistance, nameof(curve));
+        MethodInputGuards.Print(target, nameof(target), "target print size");
         return Estimate(curve.CriticalPrintSize, curve.TestDistance, target,
             new AssumptionFacts(curve.CriticalPrintSize, curve.TestDistance, curve.MaximumReadingSpeed, curve.SpeedFellBelowCriticalPrintSize));
     }

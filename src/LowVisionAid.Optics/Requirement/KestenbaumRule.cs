@@ -35,7 +35,7 @@ public static class KestenbaumRule
     /// <exception cref="ArgumentOutOfRangeException">The target print size is not greater than zero.</exception>
     public static PowerEstimate WithReserve(Acuity distanceAcuity, PrintSize target, AcuityReserve reserve)
     {
-        Inputs.Print(target, nameof(target), "target print size");
+        MethodInputGuards.Print(target, nameof(target), "target print size");
         // Kestenbaum general form: Feq = R / (V_dec × M_t) (derived from the rule's 1M-at-threshold basis; methods §2.1).
         var dioptres = reserve.Ratio / (distanceAcuity.DecimalValue * target.M);
         return PowerEstimate.Create(PowerMethod.KestenbaumWithReserve, dioptres, DefaultReference, target, reserve);

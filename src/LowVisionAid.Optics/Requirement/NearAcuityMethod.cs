@@ -21,9 +21,9 @@ public static class NearAcuityMethod
     /// <exception cref="ArgumentOutOfRangeException">A print size or the test distance is not greater than zero.</exception>
     public static PowerEstimate Estimate(PrintSize thresholdPrint, Distance testDistance, PrintSize target, AcuityReserve reserve)
     {
-        Inputs.Print(thresholdPrint, nameof(thresholdPrint), "smallest print read");
-        Inputs.TestDistance(testDistance, nameof(testDistance));
-        Inputs.Print(target, nameof(target), "target print size");
+        MethodInputGuards.Print(thresholdPrint, nameof(thresholdPrint), "smallest print read");
+        MethodInputGuards.TestDistance(testDistance, nameof(testDistance));
+        MethodInputGuards.Print(target, nameof(target), "target print size");
         // Near-acuity method: Feq = (M_th × R) / (d × M_t), EVD = d × M_t / (M_th × R) (Bailey; Lovie-Kitchin; methods §2.2).
         var dioptres = thresholdPrint.M * reserve.Ratio / (testDistance.Metres * target.M);
         return PowerEstimate.Create(PowerMethod.NearAcuity, dioptres, testDistance, target, reserve,

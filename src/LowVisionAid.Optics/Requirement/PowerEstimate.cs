@@ -104,12 +104,12 @@ public sealed record PowerEstimate
     /// <summary>Magnification relative to another reference distance: M = Feq × d_ref (Bailey 2004 notes).</summary>
     /// <exception cref="ArgumentOutOfRangeException">The reference distance is not greater than zero.</exception>
     public double MagnificationRelativeTo(Distance reference) =>
-        EquivalentPower.MagnificationRelativeTo(Inputs.ReferenceDistance(reference, nameof(reference)));
+        EquivalentPower.MagnificationRelativeTo(MethodInputGuards.ReferenceDistance(reference, nameof(reference)));
 
     /// <summary>The same estimate with its magnification stated relative to another reference distance.</summary>
     /// <exception cref="ArgumentOutOfRangeException">The reference distance is not greater than zero.</exception>
     public PowerEstimate WithReference(Distance reference) =>
-        new(Method, EquivalentPower, Inputs.ReferenceDistance(reference, nameof(reference)), TargetPrint, Reserve, Facts);
+        new(Method, EquivalentPower, MethodInputGuards.ReferenceDistance(reference, nameof(reference)), TargetPrint, Reserve, Facts);
 
     internal static PowerEstimate Create(
         PowerMethod method,

@@ -35,7 +35,7 @@ public static class ReadingCurve
     public static ReadingCurveAnalysis Analyse(Distance testDistance, IEnumerable<ReadingPoint> points)
     {
         ArgumentNullException.ThrowIfNull(points);
-        Inputs.TestDistance(testDistance, nameof(testDistance));
+        MethodInputGuards.TestDistance(testDistance, nameof(testDistance));
         var sorted = points
             .Select(p => p.PrintSize.IsValid ? p : throw new ArgumentOutOfRangeException(nameof(points), "Enter a print size greater than zero for every reading speed, such as 1.0M."))
             .OrderByDescending(p => p.PrintSize.M)

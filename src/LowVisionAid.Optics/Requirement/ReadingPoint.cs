@@ -12,7 +12,7 @@ public readonly record struct ReadingPoint
     /// <exception cref="ArgumentOutOfRangeException">The print size is not greater than zero, or the speed is negative or not finite.</exception>
     public ReadingPoint(PrintSize printSize, double wordsPerMinute)
     {
-        PrintSize = Inputs.Print(printSize, nameof(printSize), "print size of the sentence");
+        PrintSize = MethodInputGuards.Print(printSize, nameof(printSize), "print size of the sentence");
         WordsPerMinute = double.IsFinite(wordsPerMinute) && wordsPerMinute >= 0
             ? wordsPerMinute
             : throw new ArgumentOutOfRangeException(nameof(wordsPerMinute), wordsPerMinute,

@@ -77,7 +77,7 @@ public static class ReadingTestScoring
     /// <exception cref="ArgumentOutOfRangeException">The test distance is not greater than zero.</exception>
     public static double DistanceCorrection(Distance testDistance) =>
         // MNREAD distance correction: + log₁₀(0.40 / d).
-        Math.Log10(ChartDistance.Metres / Inputs.TestDistance(testDistance, nameof(testDistance)).Metres);
+        Math.Log10(ChartDistance.Metres / MethodInputGuards.TestDistance(testDistance, nameof(testDistance)).Metres);
 
     /// <summary>
     /// The physical print size of a chart line labelled <paramref name="chartLogMar"/> (for 40 cm):

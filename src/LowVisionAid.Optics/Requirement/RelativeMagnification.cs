@@ -17,8 +17,8 @@ public static class RelativeMagnification
     /// <exception cref="ArgumentOutOfRangeException">A distance is not greater than zero.</exception>
     public static double FromDistanceChange(Distance originalDistance, Distance newDistance) =>
         // Relative distance: M = old distance / new distance (Ryan and Margrain 2006).
-        Inputs.ViewingDistance(originalDistance, nameof(originalDistance), "original viewing distance")
-        / Inputs.ViewingDistance(newDistance, nameof(newDistance), "new viewing distance");
+        MethodInputGuards.ViewingDistance(originalDistance, nameof(originalDistance), "original viewing distance")
+        / MethodInputGuards.ViewingDistance(newDistance, nameof(newDistance), "new viewing distance");
 
     /// <summary>
     /// The accommodation or add needed to see clearly at a viewing distance: 1 / distance (Ryan and Margrain 2006;
@@ -26,13 +26,13 @@ public static class RelativeMagnification
     /// </summary>
     /// <exception cref="ArgumentOutOfRangeException">The distance is not greater than zero.</exception>
     public static Power FocusNeededAt(Distance viewingDistance) =>
-        Inputs.ViewingDistance(viewingDistance, nameof(viewingDistance), "viewing distance").Inverse();
+        MethodInputGuards.ViewingDistance(viewingDistance, nameof(viewingDistance), "viewing distance").Inverse();
 
     /// <summary>Relative size magnification: M = new size ÷ old size (large print, enlarged documents).</summary>
     /// <exception cref="ArgumentOutOfRangeException">A print size is not greater than zero.</exception>
     public static double FromSizeChange(PrintSize originalSize, PrintSize newSize) =>
         // Relative size: M = new object size / old object size (Ryan and Margrain 2006).
-        Inputs.Print(newSize, nameof(newSize), "new print size") / Inputs.Print(originalSize, nameof(originalSize), "original print size");
+        MethodInputGuards.Print(newSize, nameof(newSize), "new print size") / MethodInputGuards.Print(originalSize, nameof(originalSize), "original print size");
 
     /// <summary>True when an enlargement is beyond what large print can practically give (above 2.5×).</summary>
     public static bool IsBeyondLargePrintLimit(double magnification) => magnification > LargePrintPracticalLimit;

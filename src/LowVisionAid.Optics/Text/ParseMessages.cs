@@ -180,4 +180,22 @@ public static class ParseMessages
     /// <summary>A near measurement whose equivalent acuity falls outside logMAR −0.5 to 3.0.</summary>
     public const string NearAcuityOutOfRange =
         "That print size and distance give an acuity outside logMAR -0.5 to 3.0. Check both, as in 1M at 40 cm.";
+
+    // ---- Power ------------------------------------------------------------------------------------------------
+
+    /// <summary>Empty or unreadable power, or one outside −40 D to +80 D.</summary>
+    public const string PowerExpected =
+        "Type a power in dioptres, such as +2.50 or +4 D.";
+
+    // ---- Contrast sensitivity ---------------------------------------------------------------------------------
+
+    /// <summary>Empty or unreadable log contrast sensitivity, or one outside 0 to 2.4.</summary>
+    public const string ContrastSensitivityExpected =
+        "Type contrast sensitivity in log units between 0 and 2.4, such as 1.05 logCS.";
+
+    // ---- Acuity reserve ---------------------------------------------------------------------------------------
+
+    /// <summary>Empty or unreadable reserve, or one outside 1:1 to 10:1.</summary>
+    public const string AcuityReserveExpected =
+        "Type the reserve as a ratio from 1:1 to 10:1, such as 2:1.";
 }

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
 using System.Text.Json.Serialization;
-using LowVisionAid.Web.Calculator;
+using LowVisionAid.Web.Pages.Calculator;
 using Microsoft.AspNetCore.Http.HttpResults;
 
 namespace LowVisionAid.Web.Api;

@@ -1,5 +1,5 @@
 using FluentValidation;
-using LowVisionAid.Web.Calculator;
+using LowVisionAid.Web.Pages.Calculator;
 using LowVisionAid.Web.Pages.Admin;
 using LowVisionAid.Web.Pages.Clients;
 using LowVisionAid.Web.Pages.FollowUps;

@@ -179,6 +179,20 @@ public class NearAcuityNotationTests
     }
 
     [Fact]
+    public void A_measurement_typed_in_two_fields_is_read_and_checked_together()
+    {
+        // CV-04 (methods §6): 1M at 40 cm is logMAR 0.398 (Colenbrander 1/V = M × D). Tolerance ±0.005.
+        var near = NearAcuityNotation.FromParts("1M", "40 cm", Invariant);
+        Tolerance.Within(0.398, near.Value.Acuity.LogMar, 0.005, "logMAR");
+        Tolerance.Within(0.40, near.Value.TestDistance.Metres, 1e-12, "distance");
+
+        // Each part fails with its own message: the print size's first, then the distance's.
+        Assert.Equal(ParseMessages.PrintSizeExpected, NearAcuityNotation.FromParts("small", "near", Invariant).Error);
+        Assert.Equal(ParseMessages.DistanceNeedsUnit("40"), NearAcuityNotation.FromParts("1M", "40", Invariant).Error);
+        Assert.Equal(ParseMessages.NearAcuityOutOfRange, NearAcuityNotation.FromParts("100M", "1 cm", Invariant).Error);
+    }
+
+    [Fact]
     public void Creating_a_record_from_invalid_numbers_throws_for_the_programmer()
     {
         Assert.Throws<ArgumentOutOfRangeException>(() => NearAcuity.Create(default, Distance.FromCentimetres(40)));

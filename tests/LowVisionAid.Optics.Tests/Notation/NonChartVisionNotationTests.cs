@@ -55,6 +55,20 @@ public class NonChartVisionNotationTests
     }
 
     [Fact]
+    public void A_recorded_vision_is_a_chart_acuity_with_its_value_or_a_level_with_none()
+    {
+        // logMAR = log₁₀(60/6) = 1.0 for 6/60 (derived from the Snellen fraction's definition). Tolerance ±1e-9.
+        Tolerance.Within(1.0, DistanceAcuityNotation.ParseRecordedVision("6/60", Invariant).Value!.Value.LogMar, 1e-9);
+
+        var countingFingers = DistanceAcuityNotation.ParseRecordedVision("CF at 1 m", Invariant);
+        Assert.True(countingFingers.Success);
+        Assert.Null(countingFingers.Value);
+
+        Assert.Equal(ParseMessages.DistanceAcuityExpected, DistanceAcuityNotation.ParseRecordedVision("blurry", Invariant).Error);
+        Assert.Equal(ParseMessages.SnellenZero, DistanceAcuityNotation.ParseRecordedVision("6/0", Invariant).Error);
+    }
+
+    [Fact]
     public void A_chart_acuity_is_not_a_non_chart_level()
     {
         Assert.Equal(ParseMessages.DistanceAcuityExpected, NonChartVisionNotation.Parse("6/60", Invariant).Error);

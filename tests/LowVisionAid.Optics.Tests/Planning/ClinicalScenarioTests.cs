@@ -113,7 +113,7 @@ public class ClinicalScenarioTests
         {
             var o = Of(plan, kind);
             Assert.False(o.IsPractical);
-            Assert.StartsWith(Texts.NotPracticalPrefix, o.Summary(CultureInfo.InvariantCulture), StringComparison.Ordinal);
+            Assert.StartsWith(OptionNotes.NotPracticalPrefix, o.Summary(CultureInfo.InvariantCulture), StringComparison.Ordinal);
         }
 
         Assert.Equal(OptionKind.VideoMagnifier, First(plan).Kind);

@@ -6,7 +6,8 @@ namespace LowVisionAid.Web.Tests.Architecture;
 
 /// <summary>
 /// The dependency rules of docs/architecture.md: the optics core is pure (base library only), and the code that
-/// is not a page (handouts, demo, security, the plan's domain code) never reaches into the page classes.
+/// is not a page (handouts, demo, security, the plan's domain code) never reaches into the page classes; each page
+/// folder holds its feature, and the web app reads no figure by itself.
 /// </summary>
 public class DependencyRulesTests
 {
@@ -32,6 +33,19 @@ public class DependencyRulesTests
             .GetResult();
 
         Assert.True(result.IsSuccessful, Failing(result));
+    }
+
+    [Theory]
+    [InlineData("LowVisionAid.Data")]
+    [InlineData("LowVisionAid.Reports")]
+    [InlineData("LowVisionAid.Kit")]
+    public void A_library_under_the_web_app_references_only_the_optics_core_among_the_projects(string library)
+    {
+        var assembly = Web.GetReferencedAssemblies().Single(a => a.Name == library);
+        var projects = System.Reflection.Assembly.Load(assembly).GetReferencedAssemblies()
+            .Select(a => a.Name!).Where(n => n.StartsWith("LowVisionAid", StringComparison.Ordinal)).ToList();
+
+        Assert.Equal(["LowVisionAid.Optics"], projects);
     }
 
     [Theory]
@@ -68,6 +82,27 @@ public class DependencyRulesTests
             .Where(t => domain.Contains(t.Name)).Select(t => t.FullName).ToList();
 
         Assert.Empty(misplaced);
+    }
+
+    [Fact]
+    public void The_quick_calculator_is_one_feature_folder_next_to_its_pages()
+    {
+        string[] feature = ["QuickCalculatorModel", "QuickPlanHandler", "QuickPlanInput", "QuickPlanView", "CalculatorText", "ExplorerModel"];
+        var found = Types.InAssembly(Web).GetTypes().Where(t => feature.Contains(t.Name)).ToList();
+
+        Assert.Equal(feature.Length, found.Count);
+        Assert.All(found, t => Assert.Equal("LowVisionAid.Web.Pages.Calculator", t.Namespace));
+    }
+
+    [Fact]
+    public void The_web_app_reads_no_figure_itself_the_core_parsers_do()
+    {
+        // Reading a figure is the core's job (its parsers and ParseMessages); the web app holds no pattern of its own
+        // for a measurement. The only regular expression it keeps is the teacher filter's word list.
+        var result = Types.InAssembly(Web).That().ResideInNamespaceStartingWith("LowVisionAid.Web").And().DoNotHaveName("TeacherRestrictionFilter")
+            .ShouldNot().HaveDependencyOn("System.Text.RegularExpressions").GetResult();
+
+        Assert.True(result.IsSuccessful, Failing(result));
     }
 
     private static string Failing(TestResult result) =>

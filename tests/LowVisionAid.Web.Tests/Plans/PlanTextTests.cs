@@ -37,7 +37,7 @@ public class PlanTextTests
     [Fact]
     public void The_calculator_names_methods_and_options_as_the_plan_page_does()
     {
-        var view = Calculator.CalculatorText.BasisEstimate(Optics.Requirement.PowerMethod.NearAcuity, 20, System.Globalization.CultureInfo.InvariantCulture);
+        var view = LowVisionAid.Web.Pages.Calculator.CalculatorText.BasisEstimate(Optics.Requirement.PowerMethod.NearAcuity, 20, System.Globalization.CultureInfo.InvariantCulture);
 
         Assert.Contains(PlanText.Method(Optics.Requirement.PowerMethod.NearAcuity), view, StringComparison.Ordinal);
     }

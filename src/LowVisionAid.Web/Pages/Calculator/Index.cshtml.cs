@@ -2,7 +2,6 @@ using System.Globalization;
 using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Figures;
-using LowVisionAid.Web.Calculator;
 using Microsoft.AspNetCore.Mvc;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
@@ -71,11 +70,10 @@ public sealed class QuickCalculatorModel(QuickPlanHandler handler, TradeOffFigur
         }
 
         var near = plan.Estimates.FirstOrDefault(e => e.Method == "NearAcuity");
-        if (target is { } wanted && near?.Reserve is { } ratio
-            && NearAcuityNotation.Parse(input.NearAcuity, Culture).TryGetValue(out var acuity)
-            && double.TryParse(ratio.Split(':')[0], NumberStyles.Float, Culture, out var r) && r is >= 1 and <= AcuityReserve.MaximumRatio)
+        if (target is { } wanted && near?.ReserveRatio is { } ratio
+            && NearAcuityNotation.Parse(input.NearAcuity, Culture).TryGetValue(out var acuity))
         {
-            result.Add(figures.PrintSizeLadder(new PrintLadderData(acuity.Threshold, wanted, AcuityReserve.FromRatio(r), acuity.TestDistance), "calculator-ladder"));
+            result.Add(figures.PrintSizeLadder(new PrintLadderData(acuity.Threshold, wanted, AcuityReserve.FromRatio(ratio), acuity.TestDistance), "calculator-ladder"));
         }
 
         return result;
@@ -83,50 +81,4 @@ public sealed class QuickCalculatorModel(QuickPlanHandler handler, TradeOffFigur
 
     public string? ErrorFor(string field) =>
         ModelState.TryGetValue($"{nameof(Input)}.{field}", out var entry) && entry.Errors.Count > 0 ? entry.Errors[0].ErrorMessage : null;
-
-    // The optics core's one dioptre label (it drops arithmetic noise below the shown digits before rounding).
-    public static string Dioptres(double value) => Power.FromDioptres(Math.Abs(value) < 0.005 ? 0 : value).ToString("0.00", Culture);
-
-    public static string Centimetres(double value) => value < 1
-        ? (value * 10).ToString("0.0", Culture) + " mm"
-        : value.ToString(value < 10 ? "0.0" : "0", Culture) + " cm";
-
-    public static string Letters(int? letters) => letters switch
-    {
-        null => "not limited by a lens",
-        < 1 => "less than one",
-        _ => letters.Value.ToString(Culture),
-    };
-
-    public static string Times(double value) => value.ToString("0.0", Culture) + "×";
-
-    public static string Number(double value, string format = "0.##") => value.ToString(format, Culture);
-
-    public static string YesNo(bool value) => value ? "Yes" : "No";
-
-    public static string BothEyes(OptionView option)
-    {
-        ArgumentNullException.ThrowIfNull(option);
-        if (!option.BothEyesPossible)
-        {
-            return "One eye only";
-        }
-
-        var text = "Possible";
-        if (option.ConvergenceDemandPrismDioptres > 0)
-        {
-            text += "; convergence " + Number(option.ConvergenceDemandPrismDioptres, "0.#") + " Δ";
-        }
-
-        if (option.BaseInPrismEachEyeDioptres is { } prism)
-        {
-            text += "; " + Number(prism, "0.#") + " Δ base-in in each lens (add + 2 each eye)";
-            if (option.ConvergenceLeftAfterPrismDioptres is { } left)
-            {
-                text += "; convergence left after the prism " + Number(left, "0.#") + " Δ";
-            }
-        }
-
-        return text;
-    }
 }

@@ -39,11 +39,11 @@ public sealed class KitInput
         Id = Code.Trim(),
         Name = Name.Trim(),
         Kind = Enum.TryParse<DeviceKind>(Kind, out var kind) ? kind : default,
-        Power = Read(Power, Readings.Power),
-        Aperture = Read(Aperture, Readings.Distance),
-        StandHeight = Read(StandHeight, Readings.Distance),
+        Power = Read(Power, FormFieldParsers.Power),
+        Aperture = Read(Aperture, FormFieldParsers.Distance),
+        StandHeight = Read(StandHeight, FormFieldParsers.Distance),
         Magnification = double.TryParse(Magnification?.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var m) ? m : null,
-        ReadingCap = Read(ReadingCap, Readings.Power),
+        ReadingCap = Read(ReadingCap, FormFieldParsers.Power),
         Illuminated = Illuminated,
         Notes = string.IsNullOrWhiteSpace(Notes) ? null : Notes.Trim(),
     };
@@ -64,10 +64,10 @@ public sealed class KitInputValidator : AbstractValidator<KitInput>
             .MaximumLength(FieldLimits.Name).WithMessage($"Keep the description to {FieldLimits.Name} characters or fewer.");
         RuleFor(k => k.Kind)
             .Must(k => Enum.TryParse<DeviceKind>(k, out var kind) && Enum.IsDefined(kind)).WithMessage("Choose the kind of device from the list.");
-        RuleFor(k => k.Power).Reads(Readings.Power);
-        RuleFor(k => k.Aperture).Reads(Readings.Distance);
-        RuleFor(k => k.StandHeight).Reads(Readings.Distance);
-        RuleFor(k => k.ReadingCap).Reads(Readings.Power);
+        RuleFor(k => k.Power).Reads(FormFieldParsers.Power);
+        RuleFor(k => k.Aperture).Reads(FormFieldParsers.Distance);
+        RuleFor(k => k.StandHeight).Reads(FormFieldParsers.Distance);
+        RuleFor(k => k.ReadingCap).Reads(FormFieldParsers.Power);
         RuleFor(k => k.Magnification)
             .Must(m => string.IsNullOrWhiteSpace(m) || double.TryParse(m.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var x) && double.IsFinite(x))
             .WithMessage("Type the magnification as a number, such as 3 for 3×.");

@@ -66,11 +66,11 @@ public sealed class SettingsHandler(ClinicDbContext db, DemoClinic demo)
         s.ClinicContact = string.IsNullOrWhiteSpace(input.ClinicContact) ? null : input.ClinicContact.Trim();
         s.Units = input.Units;
         s.SnellenIn = input.SnellenIn;
-        s.SpotReserve = AcuityReserve.FromRatio(SettingsInput.Ratio(input.SpotReserve)!.Value);
-        s.FluentReserve = AcuityReserve.FromRatio(SettingsInput.Ratio(input.FluentReserve)!.Value);
-        s.SustainedReserve = AcuityReserve.FromRatio(SettingsInput.Ratio(input.SustainedReserve)!.Value);
+        s.SpotReserve = SettingsInput.Reserve(input.SpotReserve)!.Value;
+        s.FluentReserve = SettingsInput.Reserve(input.FluentReserve)!.Value;
+        s.SustainedReserve = SettingsInput.Reserve(input.SustainedReserve)!.Value;
         s.CharacterPitch = SettingsInput.Number(input.CharacterPitch)!.Value;
-        s.HandoutPrintSize = Readings.PrintSize(input.HandoutPrintSize).Value;
+        s.HandoutPrintSize = FormFieldParsers.PrintSize(input.HandoutPrintSize).Value;
         // Only the classes that differ from the core's defaults are kept, so the defaults stay the core's; a kind the
         // form did not send keeps what it had.
         var costs = s.CostClasses.ToImmutableDictionary();

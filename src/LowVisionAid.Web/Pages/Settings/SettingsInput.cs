@@ -1,8 +1,8 @@
 using System.Globalization;
-using System.Text.RegularExpressions;
 using FluentValidation;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Web.Infrastructure;
@@ -10,7 +10,7 @@ using LowVisionAid.Web.Infrastructure;
 namespace LowVisionAid.Web.Pages.Settings;
 
 /// <summary>The settings form as typed.</summary>
-public sealed partial class SettingsInput
+public sealed class SettingsInput
 {
     public string ClinicName { get; set; } = "";
 
@@ -35,18 +35,12 @@ public sealed partial class SettingsInput
 
     public Guid Version { get; set; }
 
-    /// <summary>A reserve typed as "2", "2:1" or "2.5 : 1"; null when it is not one.</summary>
-    internal static double? Ratio(string? text)
-    {
-        var match = RatioPattern().Match(text?.Trim() ?? "");
-        return match.Success && double.TryParse(match.Groups[1].Value.Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture, out var r) ? r : null;
-    }
+    /// <summary>A reserve typed as "2", "2:1" or "2.5 : 1" (the core's notation); null when it is not one.</summary>
+    internal static AcuityReserve? Reserve(string? text) =>
+        AcuityReserveNotation.Parse(text, CultureInfo.InvariantCulture).TryGetValue(out var reserve) ? reserve : null;
 
     internal static double? Number(string? text) =>
         double.TryParse(text?.Trim().Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && double.IsFinite(value) ? value : null;
-
-    [GeneratedRegex(@"^(\d+(?:[.,]\d+)?)\s*(?::\s*1)?$")]
-    private static partial Regex RatioPattern();
 }
 
 /// <summary>The cost class the clinic gives one kind of option.</summary>
@@ -89,7 +83,7 @@ public sealed class SettingsInputValidator : AbstractValidator<SettingsInput>
             .WithMessage("Each kind of option takes one cost class; reload the settings page and choose again.");
         RuleFor(s => s.HandoutPrintSize).Custom((text, context) =>
         {
-            var result = Readings.PrintSize(text ?? "");
+            var result = FormFieldParsers.PrintSize(text ?? "");
             if (!result.Success)
             {
                 context.AddFailure(result.Error);
@@ -101,7 +95,7 @@ public sealed class SettingsInputValidator : AbstractValidator<SettingsInput>
         });
     }
 
-    private static bool BeAReserve(string text) => SettingsInput.Ratio(text) is >= 1 and <= AcuityReserve.MaximumRatio;
+    private static bool BeAReserve(string text) => SettingsInput.Reserve(text) is not null;
 
     private static string ReserveMessage(string task, string example) =>
         $"Type the {task} reserve as a ratio from 1:1 to 10:1, such as {example}.";

@@ -64,7 +64,7 @@ public sealed class TrialInputValidator : AbstractValidator<TrialInput>
             {
                 context.AddFailure($"Keep the result to {FieldLimits.Measurement} characters or fewer.");
             }
-            else if (!Readings.PrintSize(text).Success && !Readings.Acuity(text).Success)
+            else if (!FormFieldParsers.PrintSize(text).Success && !FormFieldParsers.Acuity(text).Success)
             {
                 context.AddFailure("Type the print size or acuity reached with the device, such as 1M or 6/12.");
             }

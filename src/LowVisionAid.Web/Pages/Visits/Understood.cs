@@ -17,32 +17,32 @@ internal static class Understood
     public static IReadOnlyList<UnderstoodReading> From(VisitInput input, SnellenUnit snellen)
     {
         var rows = new List<UnderstoodReading>();
-        Add(rows, "Distance acuity, right eye", input.DistanceRight, t => Acuity(Readings.Acuity(t), snellen));
-        Add(rows, "Distance acuity, left eye", input.DistanceLeft, t => Acuity(Readings.Acuity(t), snellen));
-        Add(rows, "Distance acuity, both eyes", input.DistanceBoth, t => Acuity(Readings.Acuity(t), snellen));
-        Add(rows, "Near: smallest print read", input.NearThreshold, t => Print(Readings.PrintSize(t)));
-        Add(rows, "Near: test distance", input.NearTestDistance, t => Length(Readings.Distance(t)));
+        Add(rows, "Distance acuity, right eye", input.DistanceRight, t => Acuity(FormFieldParsers.Acuity(t), snellen));
+        Add(rows, "Distance acuity, left eye", input.DistanceLeft, t => Acuity(FormFieldParsers.Acuity(t), snellen));
+        Add(rows, "Distance acuity, both eyes", input.DistanceBoth, t => Acuity(FormFieldParsers.Acuity(t), snellen));
+        Add(rows, "Near: smallest print read", input.NearThreshold, t => Print(FormFieldParsers.PrintSize(t)));
+        Add(rows, "Near: test distance", input.NearTestDistance, t => Length(FormFieldParsers.Distance(t)));
         if (!string.IsNullOrWhiteSpace(input.NearThreshold) && !string.IsNullOrWhiteSpace(input.NearTestDistance)
-            && Readings.NearAcuity(input.NearThreshold, input.NearTestDistance).TryGetValue(out var near))
+            && FormFieldParsers.NearAcuity(input.NearThreshold, input.NearTestDistance).TryGetValue(out var near))
         {
             rows.Add(new("Near acuity", $"{input.NearThreshold.Trim()} at {input.NearTestDistance.Trim()}",
                 $"{NearAcuityNotation.Format(near, Invariant)} ({NearAcuityNotation.FormatMetresOverM(near, Invariant)})", LogMar(near.Acuity), null, null));
         }
 
-        Add(rows, "Add worn", input.AddWorn, t => Dioptres(Readings.Power(t)));
-        Add(rows, "Accommodation (measured)", input.Accommodation, t => Dioptres(Readings.Power(t)));
-        Add(rows, "Preferred working distance", input.WorkingDistance, t => Length(Readings.Distance(t)));
+        Add(rows, "Add worn", input.AddWorn, t => Dioptres(FormFieldParsers.Power(t)));
+        Add(rows, "Accommodation (measured)", input.Accommodation, t => Dioptres(FormFieldParsers.Power(t)));
+        Add(rows, "Preferred working distance", input.WorkingDistance, t => Length(FormFieldParsers.Distance(t)));
         for (var i = 0; i < input.Goals.Count; i++)
         {
             var goal = input.Goals[i];
             if (goal.IsDistanceTask)
             {
-                Add(rows, $"Goal {i + 1}: acuity wanted", goal.TargetPrint, t => Acuity(Readings.Acuity(t), snellen));
-                Add(rows, $"Goal {i + 1}: viewing distance", goal.ViewingDistance, t => Length(Readings.Distance(t)));
+                Add(rows, $"Goal {i + 1}: acuity wanted", goal.TargetPrint, t => Acuity(FormFieldParsers.Acuity(t), snellen));
+                Add(rows, $"Goal {i + 1}: viewing distance", goal.ViewingDistance, t => Length(FormFieldParsers.Distance(t)));
             }
             else
             {
-                Add(rows, $"Goal {i + 1}: target print", goal.TargetPrint, t => Print(Readings.PrintSize(t)));
+                Add(rows, $"Goal {i + 1}: target print", goal.TargetPrint, t => Print(FormFieldParsers.PrintSize(t)));
             }
         }
 
@@ -73,7 +73,7 @@ internal static class Understood
 
     private static (string?, string?, string?, string?) Print(Optics.Text.ParseResult<PrintSize> result) =>
         result.TryGetValue(out var size)
-            ? ($"{PrintSizeNotation.Format(size, PrintSizeUnit.MUnits, Invariant)} (x-height {PrintSizeNotation.Format(size, PrintSizeUnit.XHeightMillimetres, Invariant)}, about {PrintSizeNotation.Format(size, PrintSizeUnit.NNotation, Invariant)})", null, result.Warning, null)
+            ? (ReadBackText.PrintSize(size, Invariant), null, result.Warning, null)
             : (null, null, null, result.Error);
 
     private static (string?, string?, string?, string?) Length(Optics.Text.ParseResult<Distance> result) =>

@@ -123,11 +123,11 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
 
         // Counting fingers, hand movements, light perception and no light perception are recorded in any eye; they
         // are refused only for calculation (the plan uses the chart acuities and near measurements there are).
-        RuleFor(v => v.DistanceRight).Reads(Readings.RecordedVision);
-        RuleFor(v => v.DistanceLeft).Reads(Readings.RecordedVision);
-        RuleFor(v => v.DistanceBoth).Reads(Readings.RecordedVision);
-        RuleFor(v => v.NearThreshold).Reads(Readings.PrintSize);
-        RuleFor(v => v.NearTestDistance).Reads(Readings.Distance);
+        RuleFor(v => v.DistanceRight).Reads(FormFieldParsers.RecordedVision);
+        RuleFor(v => v.DistanceLeft).Reads(FormFieldParsers.RecordedVision);
+        RuleFor(v => v.DistanceBoth).Reads(FormFieldParsers.RecordedVision);
+        RuleFor(v => v.NearThreshold).Reads(FormFieldParsers.PrintSize);
+        RuleFor(v => v.NearTestDistance).Reads(FormFieldParsers.Distance);
         RuleFor(v => v.NearTestDistance)
             .NotEmpty().When(v => !string.IsNullOrWhiteSpace(v.NearThreshold))
             .WithMessage("Type the distance the near test was done at, such as 40 cm; near acuity means nothing without it.");
@@ -138,27 +138,27 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
             .Custom((threshold, context) =>
             {
                 var visit = context.InstanceToValidate;
-                if (Readings.PrintSize(threshold ?? "").Success && Readings.Distance(visit.NearTestDistance ?? "").Success
-                    && Readings.NearAcuity(threshold!, visit.NearTestDistance!) is { Success: false } near)
+                if (FormFieldParsers.PrintSize(threshold ?? "").Success && FormFieldParsers.Distance(visit.NearTestDistance ?? "").Success
+                    && FormFieldParsers.NearAcuity(threshold!, visit.NearTestDistance!) is { Success: false } near)
                 {
                     context.AddFailure(near.Error);
                 }
             });
-        RuleFor(v => v.ContrastSensitivity).Reads(Readings.LogContrastSensitivity);
+        RuleFor(v => v.ContrastSensitivity).Reads(FormFieldParsers.LogContrastSensitivity);
         RuleFor(v => v.RefractionWorn).MaximumLength(FieldLimits.Name).WithMessage($"Keep the refraction to {FieldLimits.Name} characters or fewer.");
-        RuleFor(v => v.AddWorn).Reads(Readings.Power);
-        RuleFor(v => v.Accommodation).Reads(Readings.Power);
+        RuleFor(v => v.AddWorn).Reads(FormFieldParsers.Power);
+        RuleFor(v => v.Accommodation).Reads(FormFieldParsers.Power);
         RuleFor(v => v.Accommodation)
-            .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var amplitude) || amplitude.Dioptres is >= 0 and <= MaximumAmplitude)
+            .Must(a => string.IsNullOrWhiteSpace(a) || !FormFieldParsers.Power(a).TryGetValue(out var amplitude) || amplitude.Dioptres is >= 0 and <= MaximumAmplitude)
             .WithMessage($"Type the measured amplitude of accommodation between 0 and {MaximumAmplitude} D, such as 8, or leave it empty to estimate it from age.");
         RuleFor(v => v.AddWorn)
-            .Must(a => string.IsNullOrWhiteSpace(a) || !Readings.Power(a).TryGetValue(out var add) || add.Dioptres >= 0)
+            .Must(a => string.IsNullOrWhiteSpace(a) || !FormFieldParsers.Power(a).TryGetValue(out var add) || add.Dioptres >= 0)
             .WithMessage("A reading add is a plus power; type it such as +2.50, or leave it empty.");
-        RuleFor(v => v.WorkingDistance).Reads(Readings.Distance);
+        RuleFor(v => v.WorkingDistance).Reads(FormFieldParsers.Distance);
         RuleFor(v => v.WorkingDistance)
             .Custom((typed, context) =>
             {
-                if (string.IsNullOrWhiteSpace(typed) || !Readings.Distance(typed).TryGetValue(out var distance))
+                if (string.IsNullOrWhiteSpace(typed) || !FormFieldParsers.Distance(typed).TryGetValue(out var distance))
                 {
                     return;
                 }
@@ -187,9 +187,9 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
                 .WithMessage(g => g.IsDistanceTask
                     ? "Type the distance acuity this task needs, such as 6/12 for television."
                     : "Type the print size this task needs, such as 1M for newspaper text.");
-            goal.RuleFor(g => g.TargetPrint).Reads(Readings.PrintSize).When(g => !g.IsDistanceTask);
-            goal.RuleFor(g => g.TargetPrint).Reads(Readings.Acuity).When(g => g.IsDistanceTask);
-            goal.RuleFor(g => g.ViewingDistance).Reads(Readings.Distance);
+            goal.RuleFor(g => g.TargetPrint).Reads(FormFieldParsers.PrintSize).When(g => !g.IsDistanceTask);
+            goal.RuleFor(g => g.TargetPrint).Reads(FormFieldParsers.Acuity).When(g => g.IsDistanceTask);
+            goal.RuleFor(g => g.ViewingDistance).Reads(FormFieldParsers.Distance);
             goal.RuleFor(g => g.ViewingDistance)
                 .Must(string.IsNullOrWhiteSpace).When(g => Enum.TryParse<GoalTask>(g.Task, out _) && !g.IsDistanceTask)
                 .WithMessage(NearGoalDistance);
@@ -197,7 +197,7 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
                 .Custom((typed, context) =>
                 {
                     var goalInput = context.InstanceToValidate;
-                    if (goalInput.IsDistanceTask && !string.IsNullOrWhiteSpace(typed) && Readings.Distance(typed).TryGetValue(out var distance)
+                    if (goalInput.IsDistanceTask && !string.IsNullOrWhiteSpace(typed) && FormFieldParsers.Distance(typed).TryGetValue(out var distance)
                         && TaskRules.For(Enum.Parse<GoalTask>(goalInput.Task!)).CheckDistance(distance) is { } problem)
                     {
                         context.AddFailure(problem);
@@ -211,7 +211,7 @@ public sealed class VisitInputValidator : AbstractValidator<VisitInput>
             speed.RuleFor(s => s.PrintSize)
                 .NotEmpty().When(s => s.IsUsed)
                 .WithMessage("Type the print size this speed was measured at, such as 2M.");
-            speed.RuleFor(s => s.PrintSize).Reads(Readings.PrintSize);
+            speed.RuleFor(s => s.PrintSize).Reads(FormFieldParsers.PrintSize);
             speed.RuleFor(s => s.WordsPerMinute)
                 .Must(w => int.TryParse(w?.Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out var wpm) && wpm <= MaximumWordsPerMinute)
                 .When(s => s.IsUsed)

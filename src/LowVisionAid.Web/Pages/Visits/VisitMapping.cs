@@ -17,14 +17,14 @@ internal static class VisitMapping
         (visit.DistanceRightText, visit.DistanceRight) = ReadVision(input.DistanceRight);
         (visit.DistanceLeftText, visit.DistanceLeft) = ReadVision(input.DistanceLeft);
         (visit.DistanceBothText, visit.DistanceBoth) = ReadVision(input.DistanceBoth);
-        (visit.NearThresholdText, visit.NearThreshold) = Read(input.NearThreshold, Readings.PrintSize);
-        (visit.NearTestDistanceText, visit.NearTestDistance) = Read(input.NearTestDistance, Readings.Distance);
+        (visit.NearThresholdText, visit.NearThreshold) = Read(input.NearThreshold, FormFieldParsers.PrintSize);
+        (visit.NearTestDistanceText, visit.NearTestDistance) = Read(input.NearTestDistance, FormFieldParsers.Distance);
         visit.ContrastSensitivityText = Clean(input.ContrastSensitivity);
-        visit.ContrastLogCs = visit.ContrastSensitivityText is { } cs ? Readings.LogContrastSensitivity(cs).Value : null;
+        visit.ContrastLogCs = visit.ContrastSensitivityText is { } cs ? FormFieldParsers.LogContrastSensitivity(cs).Value : null;
         visit.RefractionWorn = Clean(input.RefractionWorn);
-        (visit.AddWornText, visit.AddWorn) = Read(input.AddWorn, Readings.Power);
-        (visit.AccommodationText, visit.AccommodationMeasured) = Read(input.Accommodation, Readings.Power);
-        (visit.WorkingDistanceText, visit.WorkingDistance) = Read(input.WorkingDistance, Readings.Distance);
+        (visit.AddWornText, visit.AddWorn) = Read(input.AddWorn, FormFieldParsers.Power);
+        (visit.AccommodationText, visit.AccommodationMeasured) = Read(input.Accommodation, FormFieldParsers.Power);
+        (visit.WorkingDistanceText, visit.WorkingDistance) = Read(input.WorkingDistance, FormFieldParsers.Distance);
         visit.NeedsHandsFree = input.NeedsHandsFree;
         visit.HasTremor = input.HasTremor;
         visit.UsefulEyes = input.UsefulEyes;
@@ -37,15 +37,15 @@ internal static class VisitMapping
             var target = Clean(goal.TargetPrint)!;
             var task = Enum.Parse<GoalTask>(goal.Task!);
             var distance = VisitGoal.IsDistanceTask(task);
-            var (viewingText, viewing) = distance ? Read(goal.ViewingDistance, Readings.Distance) : (null, null);
+            var (viewingText, viewing) = distance ? Read(goal.ViewingDistance, FormFieldParsers.Distance) : (null, null);
             visit.Goals.Add(new VisitGoal
             {
                 Position = position,
                 Task = task,
                 Detail = Clean(goal.Detail),
                 TargetText = target,
-                TargetPrint = distance ? null : Readings.PrintSize(target).Value,
-                TargetAcuity = distance ? Readings.Acuity(target).Value : null,
+                TargetPrint = distance ? null : FormFieldParsers.PrintSize(target).Value,
+                TargetAcuity = distance ? FormFieldParsers.Acuity(target).Value : null,
                 ViewingDistanceText = viewingText,
                 ViewingDistance = viewing,
             });
@@ -59,7 +59,7 @@ internal static class VisitMapping
             {
                 Position = position,
                 PrintSizeText = print,
-                PrintSize = Readings.PrintSize(print).Value,
+                PrintSize = FormFieldParsers.PrintSize(print).Value,
                 WordsPerMinute = int.Parse(speed.WordsPerMinute!.Trim(), NumberStyles.None, CultureInfo.InvariantCulture),
             });
         }
@@ -93,7 +93,7 @@ internal static class VisitMapping
         Clean(typed) is { } text ? (text, parse(text).Value) : (null, null);
 
     private static (string? Text, Optics.Quantities.Acuity? Value) ReadVision(string? typed) =>
-        Clean(typed) is { } text ? (text, Readings.RecordedVision(text).Value) : (null, null);
+        Clean(typed) is { } text ? (text, FormFieldParsers.RecordedVision(text).Value) : (null, null);
 
     private static string? Clean(string? text) => string.IsNullOrWhiteSpace(text) ? null : text.Trim();
 }

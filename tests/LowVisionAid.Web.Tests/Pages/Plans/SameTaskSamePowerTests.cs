@@ -1,6 +1,6 @@
 using System.Net;
 using System.Net.Http.Json;
-using LowVisionAid.Web.Calculator;
+using LowVisionAid.Web.Pages.Calculator;
 using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;

@@ -4,8 +4,10 @@ using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Optics.Requirement;
+using LowVisionAid.Web.Infrastructure;
+using LowVisionAid.Web.Plans;
 
-namespace LowVisionAid.Web.Calculator;
+namespace LowVisionAid.Web.Pages.Calculator;
 
 /// <summary>The outcome of the quick calculator: messages keyed by input name, or the plan.</summary>
 /// <param name="Errors">What to correct, keyed by the <see cref="QuickPlanInput"/> property ("" for the form as a whole).</param>
@@ -45,7 +47,7 @@ public sealed class QuickPlanHandler
             errors, understood);
         var target = Optional(input.TargetPrint, nameof(input.TargetPrint), CalculatorText.TargetPrintLabel,
             text => PrintSizeNotation.Parse(text, provider),
-            p => $"{PrintSizeNotation.Format(p, PrintSizeUnit.MUnits, provider)} (x-height {PrintSizeNotation.Format(p, PrintSizeUnit.XHeightMillimetres, provider)}, about {PrintSizeNotation.Format(p, PrintSizeUnit.NNotation, provider)})",
+            p => ReadBackText.PrintSize(p, provider),
             errors, understood);
         var distance = Optional(input.WorkingDistance, nameof(input.WorkingDistance), CalculatorText.WorkingDistanceLabel,
             text => DistanceNotation.Parse(text, provider),
@@ -122,11 +124,11 @@ public sealed class QuickPlanHandler
             understood,
             comparison is null ? [] : [.. comparison.Estimates.Select(e => View(e, provider))],
             comparison is null ? [] : [.. comparison.Disagreements.Select(d => new DisagreementView(
-                Plans.PlanText.Method(d.Lower.Method), Plans.PlanText.Method(d.Higher.Method), d.DifferenceLogUnits, d.PowerRatio))],
+                PlanText.Method(d.Lower.Method), PlanText.Method(d.Higher.Method), d.DifferenceLogUnits, d.PowerRatio))],
             result.RequiredPower.Dioptres,
             basis,
             [.. result.Options.Select(o => View(o, provider))],
-            [.. result.NotConsidered.Select(n => new NotConsideredView(n.Kind.ToString(), Plans.PlanText.Kind(n.Kind), n.Reason))],
+            [.. result.NotConsidered.Select(n => new NotConsideredView(n.Kind.ToString(), PlanText.Kind(n.Kind), n.Reason))],
             [.. result.Cautions.Select(c => new CautionView(c.Id, c.Text))])
         {
             ReserveUsed = result.Reserve?.Reserve.ToString(null, provider),
@@ -241,12 +243,13 @@ public sealed class QuickPlanHandler
 
     private static EstimateView View(PowerEstimate e, IFormatProvider provider) => new(
         e.Method.ToString(),
-        Plans.PlanText.Method(e.Method),
+        PlanText.Method(e.Method),
         e.EquivalentPower.Dioptres,
         e.EquivalentViewingDistance.Centimetres,
         e.Magnification,
         e.ReferenceDistance.Centimetres,
         e.Reserve?.ToString(null, provider),
+        e.Reserve?.Ratio,
         e.LogUnits,
         e.Assumptions);
 
@@ -257,7 +260,7 @@ public sealed class QuickPlanHandler
         {
             Position = ranked.Position,
             Kind = o.Kind.ToString(),
-            Name = Plans.PlanText.Kind(o.Kind),
+            Name = PlanText.Kind(o.Kind),
             Summary = o.Summary(provider),
             IsApplicable = o.IsApplicable,
             NotApplicableBecause = o.NotApplicableBecause,

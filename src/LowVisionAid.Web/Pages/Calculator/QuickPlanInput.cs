@@ -1,4 +1,4 @@
-namespace LowVisionAid.Web.Calculator;
+namespace LowVisionAid.Web.Pages.Calculator;
 
 /// <summary>
 /// What the quick calculator (page or API) is given: every measurement as typed, read by the optics core's parsers.

@@ -6,7 +6,7 @@ namespace LowVisionAid.Optics.Requirement;
 /// Checks on the inputs of the required-power methods. Each message says what to enter instead, because the
 /// web app shows it beside the field.
 /// </summary>
-internal static class Inputs
+internal static class MethodInputGuards
 {
     public static Distance TestDistance(Distance distance, string paramName) =>
         distance.Metres > 0

@@ -3,7 +3,7 @@ using System.Text;
 namespace LowVisionAid.Optics.Options;
 
 /// <summary>The plain-language notes options carry. One home for the wording.</summary>
-public static class Texts
+public static class OptionNotes
 {
     /// <summary>Moving closer needs more than a modest add.</summary>
     public const string MoreThanModestAdd = "Getting this close needs more than a modest add: see the spectacle high add.";

@@ -3,7 +3,7 @@ using LowVisionAid.Data;
 
 namespace LowVisionAid.Web.Infrastructure;
 
-internal static class ReadsExtension
+internal static class ParsedFieldRules
 {
     /// <summary>An optional measurement: empty is fine; anything typed must be read by <paramref name="parse"/>, whose message is shown.</summary>
     public static IRuleBuilderOptionsConditions<T, string?> Reads<T, TValue>(this IRuleBuilder<T, string?> rule, Func<string, Optics.Text.ParseResult<TValue>> parse) =>

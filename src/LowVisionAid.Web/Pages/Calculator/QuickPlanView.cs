@@ -1,4 +1,4 @@
-namespace LowVisionAid.Web.Calculator;
+namespace LowVisionAid.Web.Pages.Calculator;
 
 // The view-ready plan, shown by the calculator page and returned as JSON by the API. Figures are in the units their
 // names say (dioptres, centimetres, ×), unrounded; the page rounds for display.
@@ -54,6 +54,7 @@ public sealed record UnderstoodInput(string Field, string Label, string Typed, s
 /// <param name="Magnification">Feq × reference distance.</param>
 /// <param name="ReferenceDistanceCm">The reference distance the magnification is stated against, cm.</param>
 /// <param name="Reserve">The acuity reserve applied ("2:1"), or null when built in.</param>
+/// <param name="ReserveRatio">The same reserve as a number (2 for 2:1), or null when built in.</param>
 /// <param name="LogUnits">log₁₀(Feq), for comparing estimates.</param>
 /// <param name="Assumptions">What the method assumed, in words.</param>
 public sealed record EstimateView(
@@ -64,6 +65,7 @@ public sealed record EstimateView(
     double Magnification,
     double ReferenceDistanceCm,
     string? Reserve,
+    double? ReserveRatio,
     double LogUnits,
     IReadOnlyList<string> Assumptions);
 
