@@ -22,7 +22,7 @@ public static class SitePages
         // The print views (no site navigation: made for printing) and the explanation for a plan without a choice
         // (demo plan 3). /Plans/1/Print with no "for" is the client view.
         ("Plans/1/Print?for=client", "Your magnifier plan"),
-        ("Plans/1/Print?for=clinician", "Clinician summary"),
+        ("Plans/1/Print?for=clinician", "Magnifier plan: clinician summary"),
         ("Plans/3/Handout", "Client handout"),
         ("Trials/New?planId=1", "Record a trial for DEMO-01"),
         ("FollowUps", "Follow-ups due"),
