@@ -3,7 +3,7 @@ using System.Globalization;
 namespace LowVisionAid.Load;
 
 /// <summary>The harness's settings, from its command line.</summary>
-public sealed record Options(string Out, int Requests, SyntheticSize Size)
+public sealed record Options(string Out, int Requests, SyntheticSize Size, bool Reuse = false)
 {
     public static Options Parse(string[] args)
     {
@@ -21,7 +21,8 @@ public sealed record Options(string Out, int Requests, SyntheticSize Size)
         return new Options(
             values.GetValueOrDefault("out", "test-artifacts/load"),
             Number("requests", 200),
-            new SyntheticSize(Number("clients", size.Clients), Number("visits", size.Visits), Number("plans", size.Plans), Number("trials", size.Trials)));
+            new SyntheticSize(Number("clients", size.Clients), Number("visits", size.Visits), Number("plans", size.Plans), Number("trials", size.Trials)),
+            values.TryGetValue("reuse", out var reuse) && bool.Parse(reuse));
     }
 
     /// <summary>The folder that holds LowVisionAid.sln, found from the working folder upwards.</summary>

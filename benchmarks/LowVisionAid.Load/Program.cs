@@ -3,7 +3,9 @@ using System.Text;
 using LowVisionAid.Load;
 
 // The load and scale harness: `bash scripts/load.sh` builds the app in Release and runs `all` (docs/performance.md).
-//   all [--out DIR] [--requests N] [--clients N] [--visits N] [--plans N] [--trials N]
+//   all [--out DIR] [--requests N] [--clients N] [--visits N] [--plans N] [--trials N] [--reuse true]
+// --reuse true keeps DIR/demo and DIR/scale from an earlier run (no empty-folder start, no generation): the same
+// databases measured again, e.g. on a quieter machine.
 // Makes DIR/demo (the demo clinic, from an empty folder) and DIR/scale (the demo clinic plus a synthetic clinic),
 // measures start-up and every target at 1, 5 and 20 concurrent clients on each, and writes DIR/results.md.
 var options = Options.Parse(args);
@@ -21,7 +23,8 @@ if (!File.Exists(webDll))
 var output = Path.GetFullPath(options.Out, root);
 var demoFolder = Path.Combine(output, "demo");
 var scaleFolder = Path.Combine(output, "scale");
-foreach (var folder in new[] { demoFolder, scaleFolder })
+var reusing = options.Reuse && File.Exists(Path.Combine(demoFolder, "lowvisionaid.db")) && File.Exists(Path.Combine(scaleFolder, "lowvisionaid.db"));
+foreach (var folder in reusing ? [] : new[] { demoFolder, scaleFolder })
 {
     if (Directory.Exists(folder))
     {
@@ -33,9 +36,10 @@ var loadBefore = File.ReadAllText("/proc/loadavg").Trim();
 Say($"machine load {loadBefore}");
 
 // The demo clinic: a start on an empty folder (database made, demo loaded), then starts on the existing database.
-TimeSpan emptyStart;
-await using (var first = await AppProcess.StartAsync(webDll, demoFolder, loadDemo: true))
+var emptyStart = TimeSpan.Zero;
+if (!reusing)
 {
+    await using var first = await AppProcess.StartAsync(webDll, demoFolder, loadDemo: true);
     emptyStart = first.StartUp;
 }
 
@@ -43,14 +47,18 @@ Say("load on the demo clinic");
 var (demoStarts, demo, demoPeak) = await StartsThenLoadAsync(demoFolder);
 
 // The synthetic clinic on top of a copy of the demo clinic's database.
-Directory.CreateDirectory(scaleFolder);
-foreach (var file in Directory.GetFiles(demoFolder, "lowvisionaid.db*"))
+var generated = TimeSpan.Zero;
+if (!reusing)
 {
-    File.Copy(file, Path.Combine(scaleFolder, Path.GetFileName(file)));
-}
+    Directory.CreateDirectory(scaleFolder);
+    foreach (var file in Directory.GetFiles(demoFolder, "lowvisionaid.db*"))
+    {
+        File.Copy(file, Path.Combine(scaleFolder, Path.GetFileName(file)));
+    }
 
-Say($"adding {options.Size.Clients:N0} clients, {options.Size.Visits:N0} visits, {options.Size.Plans:N0} plans, {options.Size.Trials:N0} trials");
-var generated = await SyntheticClinic.AddAsync(scaleFolder, options.Size, Say);
+    Say($"adding {options.Size.Clients:N0} clients, {options.Size.Visits:N0} visits, {options.Size.Plans:N0} plans, {options.Size.Trials:N0} trials");
+    generated = await SyntheticClinic.AddAsync(scaleFolder, options.Size, Say);
+}
 var dbBytes = new FileInfo(Path.Combine(scaleFolder, "lowvisionaid.db")).Length;
 Say($"generated in {generated.TotalSeconds:0} s; database {dbBytes / 1048576.0:0} MB");
 

@@ -13,9 +13,10 @@ public static class Report
         var c = CultureInfo.InvariantCulture;
         var s = new StringBuilder();
         s.AppendLine(c, $"Run at {DateTime.UtcNow:yyyy-MM-dd HH:mm} UTC on {Environment.ProcessorCount} cores; load average before {loadBefore}, after {loadAfter}.");
-        s.AppendLine(c, $"Synthetic clinic: {options.Size.Clients:N0} clients, {options.Size.Visits:N0} visits, {options.Size.Plans:N0} plans, {options.Size.Trials:N0} trials, made in {generated.TotalSeconds:0} s ({dbBytes / 1048576.0:0} MB). {options.Requests} requests per cell after 5 warm-up requests.");
+        var made = options.Reuse && generated == TimeSpan.Zero ? "reused from an earlier run" : $"made in {generated.TotalSeconds:0} s";
+        s.AppendLine(c, $"Synthetic clinic: {options.Size.Clients:N0} clients, {options.Size.Visits:N0} visits, {options.Size.Plans:N0} plans, {options.Size.Trials:N0} trials, {made} ({dbBytes / 1048576.0:0} MB). {options.Requests} requests per cell after 5 warm-up requests.");
         s.AppendLine();
-        s.AppendLine(c, $"Start to first page: empty folder (database made, demo loaded) {Ms(emptyStart)}; existing demo database {string.Join(", ", demoStarts.Select(Ms))}; existing database at scale {string.Join(", ", scaleStarts.Select(Ms))}.");
+        s.AppendLine(c, $"Start to first page: empty folder (database made, demo loaded) {(emptyStart == TimeSpan.Zero ? "not measured (reused)" : Ms(emptyStart))}; existing demo database {string.Join(", ", demoStarts.Select(Ms))}; existing database at scale {string.Join(", ", scaleStarts.Select(Ms))}.");
         s.AppendLine(c, $"Peak working set: demo {demoPeak / 1048576.0:0} MB, at scale {scalePeak / 1048576.0:0} MB.");
         s.AppendLine();
         s.AppendLine("| Target | Clients at once | Demo p50 / p95 / p99 ms | Demo req/s | Scale p50 / p95 / p99 ms | Scale req/s | p95 scale ÷ demo | Bytes | Errors |");

@@ -1,6 +1,8 @@
 using LowVisionAid.Data.Access;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Diagnostics;
+using Microsoft.Extensions.Logging;
 
 namespace LowVisionAid.Data;
 
@@ -31,7 +33,13 @@ public static class ClinicDatabase
         ArgumentNullException.ThrowIfNull(options);
         // One query per Include chain (EF's default, stated so EF does not warn at each first use): a visit's goals and
         // reading speeds are a handful of rows, read in one consistent snapshot.
-        return options.UseSqlite(connectionString, sqlite => sqlite.MigrationsAssembly(MigrationsAssembly).UseQuerySplittingBehavior(QuerySplittingBehavior.SingleQuery));
+        return options.UseSqlite(connectionString, sqlite => sqlite.MigrationsAssembly(MigrationsAssembly).UseQuerySplittingBehavior(QuerySplittingBehavior.SingleQuery))
+            // SQLite cannot drop a column or change a key in place: EF Core's SQLite provider rebuilds the table and
+            // must turn foreign keys off for that outside the migration's transaction (SQLite ignores the pragma inside
+            // one; sqlite.org/lang_altertable.html, "Making Other Kinds Of Table Schema Changes"). EF Core 10 warns
+            // about its own rebuild step. An existing database gets a backup before any migration (DatabaseStartUp),
+            // so the warning is kept in the log at Information, where a start that migrates can still be traced.
+            .ConfigureWarnings(w => w.Log((RelationalEventId.NonTransactionalMigrationOperationWarning, LogLevel.Information)));
     }
 
     /// <summary>

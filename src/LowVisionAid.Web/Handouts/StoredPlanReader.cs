@@ -33,12 +33,16 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
     {
         var plan = await db.Plans.AsNoTracking()
             .Include(p => p.Visit).ThenInclude(v => v!.Client)
-            .Include(p => p.Trials).ThenInclude(t => t.KitDevice)
             .FirstOrDefaultAsync(p => p.Id == planId, ct).ConfigureAwait(false);
         if (plan?.Visit?.Client is null)
         {
             return null;
         }
+
+        // The trials by their own indexed query: included with the plan, SQLite materialised every trial in the
+        // database joined with its kit device before picking this plan's (docs/performance.md, the handout at scale).
+        plan.Trials.AddRange(await db.Trials.AsNoTracking().Include(t => t.KitDevice).Where(t => t.PlanId == planId)
+            .ToListAsync(ct).ConfigureAwait(false));
 
         var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false)
             ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
