@@ -29,7 +29,16 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 
-    public async Task<PlanReportData?> ReadAsync(int planId, CancellationToken ct)
+    public async Task<PlanReportData?> ReadAsync(int planId, CancellationToken ct) =>
+        await LoadAsync(planId, ct).ConfigureAwait(false) is { } loaded
+            ? Read(loaded.Plan, loaded.Plan.Visit!, loaded.Plan.Visit!.Client!, loaded.Settings, calendar)
+            : null;
+
+    /// <summary>
+    /// Loads a plan with its visit, client and trials (each with its kit device) and the clinic's settings, in three
+    /// indexed queries: what <see cref="Read(Plan, Visit, Client, ClinicSettings, ClinicCalendar)"/> and the plan page need.
+    /// </summary>
+    public async Task<(Plan Plan, ClinicSettings Settings)?> LoadAsync(int planId, CancellationToken ct)
     {
         var plan = await db.Plans.AsNoTracking()
             .Include(p => p.Visit).ThenInclude(v => v!.Client)
@@ -46,19 +55,23 @@ public sealed class StoredPlanReader(ClinicDbContext db, ClinicCalendar calendar
 
         var settings = await db.Settings.AsNoTracking().OrderBy(s => s.Id).FirstOrDefaultAsync(ct).ConfigureAwait(false)
             ?? Demo.DemoClinic.DefaultSettings("My clinic", hasDemoData: false);
-        return Read(plan, plan.Visit, plan.Visit.Client, settings, calendar);
+        return (plan, settings);
     }
 
     /// <summary>Reads a plan already loaded with its visit, client and trials (pure: no database).</summary>
-    public static PlanReportData Read(Plan plan, Visit visit, Client client, ClinicSettings settings, ClinicCalendar calendar)
+    public static PlanReportData Read(Plan plan, Visit visit, Client client, ClinicSettings settings, ClinicCalendar calendar) =>
+        Read(plan, LegacyPlanReader.Read(plan ?? throw new ArgumentNullException(nameof(plan))), visit, client, settings, calendar);
+
+    /// <summary>Reads a plan whose outputs the caller has already read (the plan page), so they are parsed once.</summary>
+    public static PlanReportData Read(Plan plan, TypedPlan outputs, Visit visit, Client client, ClinicSettings settings, ClinicCalendar calendar)
     {
         ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(outputs);
         ArgumentNullException.ThrowIfNull(visit);
         ArgumentNullException.ThrowIfNull(client);
         ArgumentNullException.ThrowIfNull(settings);
         ArgumentNullException.ThrowIfNull(calendar);
         var imperial = settings.Units == UnitSystem.Imperial;
-        var outputs = LegacyPlanReader.Read(plan);
         var inputs = PlanJson.Read<PlanInputs>(plan.InputsJson);
         var trials = plan.Trials.OrderBy(t => t.TrialDate).ThenBy(t => t.Id).ToList();
 

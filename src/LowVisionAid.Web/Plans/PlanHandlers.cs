@@ -1,5 +1,6 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.Web.Handouts;
 using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Optics.Planning;
 using Microsoft.EntityFrameworkCore;
@@ -160,25 +161,28 @@ public sealed record PlanTrialRow(int Id, DateOnly Date, string Device, string O
 
 public sealed record PlanView(
     int Id, int VisitId, DateOnly VisitDate, int ClientId, string ClientCode, bool IsDemo, DateTimeOffset Created,
-    TypedPlan Outputs, IReadOnlyList<PlanTrialRow> Trials, PlanChoices Choices);
+    TypedPlan Outputs, IReadOnlyList<PlanTrialRow> Trials, PlanChoices Choices, PlanReportData Report);
 
-public sealed class PlanDetailsHandler(ClinicDbContext db, ClinicCalendar calendar)
+/// <summary>
+/// The plan page's data from one load (the plan with its visit, client and trials, and the settings) and one read of
+/// its stored outputs: the typed plan for the page, and the report data for its handouts section.
+/// </summary>
+public sealed class PlanDetailsHandler(StoredPlanReader reader, ClinicCalendar calendar)
 {
     public async Task<PlanView?> HandleAsync(int id, CancellationToken ct)
     {
-        var plan = await db.Plans.AsNoTracking().Where(p => p.Id == id)
-            .Select(p => new { p.Id, p.VisitId, p.Visit!.VisitDate, p.Visit.ClientId, p.Visit.Client!.Code, p.Visit.Client.IsDemo, p.CreatedUtc, p.MethodVersion, p.InputsJson, p.OutputsJson, p.Choices })
-            .FirstOrDefaultAsync(ct).ConfigureAwait(false);
-        if (plan is null)
+        if (await reader.LoadAsync(id, ct).ConfigureAwait(false) is not var (plan, settings))
         {
             return null;
         }
 
-        var trials = await db.Trials.AsNoTracking().Where(t => t.PlanId == id).OrderBy(t => t.TrialDate).ThenBy(t => t.Id)
-            .ToListAsync(ct).ConfigureAwait(false);
-        return new PlanView(plan.Id, plan.VisitId, plan.VisitDate, plan.ClientId, plan.Code, plan.IsDemo, calendar.Local(plan.CreatedUtc),
-            LegacyPlanReader.Read(plan.OutputsJson, plan.InputsJson, plan.MethodVersion),
+        var visit = plan.Visit!;
+        var outputs = LegacyPlanReader.Read(plan);
+        var trials = plan.Trials.OrderBy(t => t.TrialDate).ThenBy(t => t.Id);
+        return new PlanView(plan.Id, plan.VisitId, visit.VisitDate, visit.ClientId, visit.Client!.Code, visit.Client.IsDemo, calendar.Local(plan.CreatedUtc),
+            outputs,
             [.. trials.Select(t => new PlanTrialRow(t.Id, t.TrialDate, t.DeviceDescription, Labels.Outcome(t.Outcome), Labels.FollowUp(t.FollowUpDue, t.FollowUpDone), t.ResultText, t.ClientComment))],
-            plan.Choices);
+            plan.Choices,
+            StoredPlanReader.Read(plan, outputs, visit, visit.Client, settings, calendar));
     }
 }
