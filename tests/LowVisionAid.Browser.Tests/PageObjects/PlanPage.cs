@@ -52,10 +52,19 @@ public sealed class PlanPage(IPage page)
     public ILocator Option(string name) =>
         page.Locator("details.option").Filter(new() { Has = page.Locator("summary", new() { HasTextString = name }) });
 
-    /// <summary>Opens an option's disclosure (its full figures, posture, reasons and buttons) when it is closed.</summary>
+    /// <summary>
+    /// Opens an option's disclosure (its full figures, posture, reasons and buttons) when it is closed, as a user does:
+    /// first its goal's "Each option in full" list, then the option.
+    /// </summary>
     public async Task OpenAsync(string name)
     {
         var option = Option(name).First;
+        var list = option.Locator("xpath=ancestor::details[contains(@class, 'options-in-full')]");
+        if (await list.GetAttributeAsync("open") is null)
+        {
+            await list.Locator(":scope > summary").ClickAsync();
+        }
+
         if (await option.GetAttributeAsync("open") is null)
         {
             await option.Locator("summary").ClickAsync();
