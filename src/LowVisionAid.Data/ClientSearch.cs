@@ -60,7 +60,8 @@ public static class ClientSearch
     /// The clients whose code or name holds <paramref name="typed"/>. Three or more letters with no LIKE wildcard in
     /// them are looked up in the trigram index ClientSearchIndex (SQLite FTS5 over the search text, made and kept by
     /// the ListsAtScale migration's triggers), so only the matching clients are read; anything shorter, or holding
-    /// %, _ or \, is matched against the stored search text (which the client-list index also holds).
+    /// %, _ or \, is matched against the stored search text (which the client-list index also holds). On a PostgreSQL
+    /// server every search is that LIKE, which the server's trigram index on the search text serves.
     /// </summary>
     public static IQueryable<Entities.Client> Matching(ClinicDbContext db, string typed)
     {
@@ -71,7 +72,7 @@ public static class ClientSearch
             folded = folded[..MaximumLength];
         }
 
-        if (folded.Length >= 3 && folded.IndexOfAny(['%', '_', '\\']) < 0)
+        if (!db.Database.IsServer() && folded.Length >= 3 && folded.IndexOfAny(['%', '_', '\\']) < 0)
         {
             var anywhere = "%" + folded + "%";
             return db.Clients.FromSql($"SELECT * FROM Clients WHERE Id IN (SELECT rowid FROM ClientSearchIndex WHERE SearchText LIKE {anywhere})");

@@ -47,6 +47,12 @@ public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, T
         configurationBuilder.Properties<AcuityReserve>().HaveConversion<AcuityReserveConverter>();
         configurationBuilder.Properties<VisualAngle>().HaveConversion<VisualAngleConverter>();
         configurationBuilder.Properties<Enum>().HaveConversion<string>().HaveMaxLength(40);
+        if (Database.IsServer())
+        {
+            // PostgreSQL's timestamptz takes only UTC times; SQLite keeps none of the kind, so a time read from a file
+            // (moving a clinic to a server) comes back Unspecified. Every stored time here is UTC already.
+            configurationBuilder.Properties<DateTime>().HaveConversion<UtcDateTimeConverter>();
+        }
     }
 
     // Identity's own tables are configured by IdentityDbContext; every other entity has its configuration in Configurations/.
@@ -54,6 +60,22 @@ public sealed class ClinicDbContext(DbContextOptions<ClinicDbContext> options, T
     {
         base.OnModelCreating(builder);
         builder.ApplyConfigurationsFromAssembly(typeof(ClinicDbContext).Assembly);
+
+        // Codes are unique and found whatever their case ("ab-1" is "AB-1"), with each provider's own collation.
+        var caseInsensitive = "NOCASE";
+        if (Database.IsServer())
+        {
+            caseInsensitive = ClinicDatabase.ServerCaseInsensitiveCollation;
+            builder.HasCollation(caseInsensitive, locale: "und-u-ks-level2", provider: "icu", deterministic: false);
+
+            // Any part of a name or code: a trigram index over the folded search text serves LIKE '%…%'
+            // (postgresql.org/docs/current/pgtrgm.html, "Index Support"); SQLite has its FTS5 table instead (ClientSearch).
+            builder.HasPostgresExtension("pg_trgm");
+            builder.Entity<Client>().HasIndex(c => c.SearchText, "IX_Clients_SearchText_Trigram").HasMethod("gin").HasOperators("gin_trgm_ops");
+        }
+
+        builder.Entity<Client>().Property(c => c.Code).UseCollation(caseInsensitive);
+        builder.Entity<KitDevice>().Property(k => k.Code).UseCollation(caseInsensitive);
     }
 
     public override int SaveChanges(bool acceptAllChangesOnSuccess)

@@ -10,6 +10,7 @@ namespace LowVisionAid.Data.Audit;
 public static class AuditWriter
 {
     // EF Core's SQLite provider stores DateTime as this text form; the audit view reads it back through EF Core.
+    // PostgreSQL takes the UTC time itself (timestamp with time zone).
     private const string StoredDateTime = "yyyy-MM-dd HH:mm:ss.FFFFFFF";
 
     public static async Task InsertAsync(DbConnection connection, DbTransaction? transaction, AuditEntry entry, CancellationToken ct)
@@ -20,13 +21,14 @@ public static class AuditWriter
         command.Transaction = transaction;
         command.CommandText =
             $"INSERT INTO \"{AuditEntry.Table}\" (\"AtUtc\", \"Actor\", \"Action\", \"RecordType\", \"RecordId\", \"Detail\") " +
-            "VALUES ($at, $actor, $action, $type, $id, $detail)";
-        Add(command, "$at", entry.AtUtc.ToString(StoredDateTime, CultureInfo.InvariantCulture));
-        Add(command, "$actor", Truncate(entry.Actor, AuditEntry.ActorLength));
-        Add(command, "$action", entry.Action.ToString());
-        Add(command, "$type", entry.RecordType);
-        Add(command, "$id", entry.RecordId);
-        Add(command, "$detail", entry.Detail is null ? null : Truncate(entry.Detail, AuditEntry.DetailLength));
+            "VALUES (@at, @actor, @action, @type, @id, @detail)";
+        var at = DateTime.SpecifyKind(entry.AtUtc, DateTimeKind.Utc);
+        Add(command, "@at", connection is Npgsql.NpgsqlConnection ? at : at.ToString(StoredDateTime, CultureInfo.InvariantCulture));
+        Add(command, "@actor", Truncate(entry.Actor, AuditEntry.ActorLength));
+        Add(command, "@action", entry.Action.ToString());
+        Add(command, "@type", entry.RecordType);
+        Add(command, "@id", entry.RecordId);
+        Add(command, "@detail", entry.Detail is null ? null : Truncate(entry.Detail, AuditEntry.DetailLength));
         await command.ExecuteNonQueryAsync(ct).ConfigureAwait(false);
     }
 

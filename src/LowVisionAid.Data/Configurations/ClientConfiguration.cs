@@ -8,7 +8,7 @@ internal sealed class ClientConfiguration : IEntityTypeConfiguration<Client>
 {
     public void Configure(EntityTypeBuilder<Client> builder)
     {
-        builder.Property(c => c.Code).HasMaxLength(FieldLimits.Code).UseCollation("NOCASE");
+        builder.Property(c => c.Code).HasMaxLength(FieldLimits.Code);   // case-insensitive: ClinicDbContext.OnModelCreating
         builder.HasIndex(c => c.Code).IsUnique();
         builder.Property(c => c.Name).HasMaxLength(FieldLimits.Name);
         builder.HasIndex(c => c.Name);

@@ -8,7 +8,7 @@ internal sealed class KitDeviceConfiguration : IEntityTypeConfiguration<KitDevic
 {
     public void Configure(EntityTypeBuilder<KitDevice> builder)
     {
-        builder.Property(k => k.Code).HasMaxLength(FieldLimits.Code).UseCollation("NOCASE");
+        builder.Property(k => k.Code).HasMaxLength(FieldLimits.Code);   // case-insensitive: ClinicDbContext.OnModelCreating
         builder.HasIndex(k => k.Code).IsUnique();
         builder.Property(k => k.Name).HasMaxLength(FieldLimits.Name);
         builder.Property(k => k.Notes).HasMaxLength(FieldLimits.Notes);

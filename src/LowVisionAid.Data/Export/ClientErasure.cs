@@ -9,7 +9,7 @@ public sealed record ErasureResult(bool Erased, IReadOnlyDictionary<string, int>
 
 /// <summary>
 /// Erases one client completely: every row of <see cref="ClientRecord"/>, deleted children first, with SQLite's
-/// secure_delete on so the freed pages are overwritten, and one audit line (table, number and row counts only) in
+/// secure_delete on so the freed pages are overwritten (a server reclaims them by its vacuum), and one audit line (table, number and row counts only) in
 /// the same transaction. Backups taken earlier still hold the client until they are deleted.
 /// </summary>
 public static class ClientErasure
@@ -22,7 +22,12 @@ public static class ClientErasure
         try
         {
             var connection = db.Database.GetDbConnection();
-            await ExecuteAsync(connection, null, "PRAGMA secure_delete = ON", ct).ConfigureAwait(false);
+            var file = !db.Database.IsServer();
+            if (file)
+            {
+                await ExecuteAsync(connection, null, "PRAGMA secure_delete = ON", ct).ConfigureAwait(false);
+            }
+
             await using var transaction = await connection.BeginTransactionAsync(ct).ConfigureAwait(false);
             await db.Database.UseTransactionAsync(transaction, ct).ConfigureAwait(false);
             var record = await ClientRecord.ReadAsync(db, clientId, ct).ConfigureAwait(false);
@@ -53,8 +58,12 @@ public static class ClientErasure
             await transaction.CommitAsync(ct).ConfigureAwait(false);
             await db.Database.UseTransactionAsync(null, ct).ConfigureAwait(false);
 
-            // Move the overwritten pages out of the write-ahead log into the main file and empty the log.
-            await ExecuteAsync(connection, null, "PRAGMA wal_checkpoint(TRUNCATE)", ct).ConfigureAwait(false);
+            // Move the overwritten pages out of the write-ahead log into the main file and empty the log. On a server the
+            // deleted rows' space is reclaimed by the server's vacuum (docs/deployment.md).
+            if (file)
+            {
+                await ExecuteAsync(connection, null, "PRAGMA wal_checkpoint(TRUNCATE)", ct).ConfigureAwait(false);
+            }
             return new ErasureResult(true, counts);
         }
         finally

@@ -63,9 +63,9 @@ public static class ClientRecord
         await using (var command = connection.CreateCommand())
         {
             command.Transaction = transaction;
-            command.CommandText = $"SELECT * FROM \"{table}\" WHERE \"{whereColumn}\" = $value ORDER BY \"{keyColumn}\"";
+            command.CommandText = $"SELECT * FROM \"{table}\" WHERE \"{whereColumn}\" = @value ORDER BY \"{keyColumn}\"";
             var parameter = command.CreateParameter();
-            parameter.ParameterName = "$value";
+            parameter.ParameterName = "@value";   // named as both SQLite and PostgreSQL read it
             parameter.Value = value;
             command.Parameters.Add(parameter);
             await using var reader = await command.ExecuteReaderAsync(ct).ConfigureAwait(false);

@@ -12,8 +12,12 @@ internal static partial class AppLog
     public const string RequestCategory = "LowVisionAid.Web.Requests";
 
     [LoggerMessage(EventId = 1000, Level = LogLevel.Information,
-        Message = "LowVisionAid {Version} starting in {Environment}; data folder {DataFolder}; {Access}")]
-    public static partial void Starting(ILogger logger, string version, string environment, string dataFolder, string access);
+        Message = "LowVisionAid {Version} starting in {Environment}; data folder {DataFolder}; {Database}; {Access}")]
+    public static partial void Starting(ILogger logger, string version, string environment, string dataFolder, string database, string access);
+
+    [LoggerMessage(EventId = 1002, Level = LogLevel.Information,
+        Message = "The database is on a shared server: back it up with the server's own tools (pg_dump) before an upgrade; the app takes no backup of it.")]
+    public static partial void ServerBackupIsTheAdministrators(ILogger logger);
 
     [LoggerMessage(EventId = 1001, Level = LogLevel.Warning,
         Message = "An earlier start was stopped while it migrated the database; its migration lock was released.")]

@@ -5,7 +5,7 @@ using Microsoft.Extensions.Options;
 
 namespace LowVisionAid.Web.Infrastructure;
 
-/// <summary>The database: where its files live, how it is opened, its backups, and what happens to it at start.</summary>
+/// <summary>The database: which provider (the SQLite file or a shared server), where its files live, how it is opened, its backups, and what happens to it at start.</summary>
 internal static class ClinicDataSetup
 {
     public const string FolderProblem =
@@ -18,13 +18,22 @@ internal static class ClinicDataSetup
             .Bind(builder.Configuration)
             .Validate(o => o.FoldersAreValid(), FolderProblem)
             .ValidateOnStart();
+        services.AddOptions<ClinicDatabaseOptions>()
+            .BindConfiguration(ClinicDatabaseOptions.Section)
+            .Validate(o => o.Problem() is null, "The Database settings are not usable (the start-up message says what to type).")
+            .ValidateOnStart();
         services.AddSingleton(sp => ClinicFolders.Resolve(sp.GetRequiredService<IOptions<ClinicDataOptions>>().Value, sp.GetRequiredService<IHostEnvironment>().ContentRootPath));
+        services.AddSingleton(sp => ClinicDatabaseTarget.Resolve(sp.GetRequiredService<IOptions<ClinicDatabaseOptions>>().Value, sp.GetRequiredService<ClinicFolders>()));
         services.AddSingleton(TimeProvider.System);
         services.AddSingleton(sp => ClinicCalendar.From(sp.GetRequiredService<IConfiguration>(), sp.GetRequiredService<TimeProvider>()));
 
         // Options built once: the connection string (and the data folder it creates) does not change while the app runs.
         services.AddDbContext<ClinicDbContext>(
-            (sp, options) => options.UseClinicSqlite(sp.GetRequiredService<ClinicFolders>().ConnectionString),
+            (sp, options) =>
+            {
+                var target = sp.GetRequiredService<ClinicDatabaseTarget>();
+                options.UseClinicDatabase(target.Provider, target.ConnectionString);
+            },
             optionsLifetime: ServiceLifetime.Singleton);
         services.AddScoped(sp =>
         {

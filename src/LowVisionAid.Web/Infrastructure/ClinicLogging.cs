@@ -60,7 +60,7 @@ internal static class ClinicLogging
             .CreateLogger();
     }
 
-    /// <summary>The first line of a start: version, environment, data folder and who may reach the app.</summary>
+    /// <summary>The first line of a start: version, environment, data folder, database (without a password) and who may reach the app.</summary>
     public static void LogStarting(this WebApplication app)
     {
         ArgumentNullException.ThrowIfNull(app);
@@ -72,10 +72,12 @@ internal static class ClinicLogging
         var access = app.Services.GetRequiredService<AccessSettings>();
         var version = typeof(ClinicLogging).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion ?? "(unknown version)";
         var reach = access.AllowLan ? "clinic network allowed, sign-in required"
+            : access.SharedDatabase ? "this computer only, sign-in required (shared database)"
             : access.SignInRequired ? "this computer only, sign-in required"
             : "this computer only, no sign-in";
         var dataFolder = app.Services.GetRequiredService<ClinicFolders>().Data;
-        AppLog.Starting(app.Logger, version, app.Environment.EnvironmentName, dataFolder, reach);
+        var database = app.Services.GetRequiredService<ClinicDatabaseTarget>().Description;   // never the password
+        AppLog.Starting(app.Logger, version, app.Environment.EnvironmentName, dataFolder, database, reach);
     }
 
     /// <summary>

@@ -36,7 +36,16 @@ public sealed class DatabaseStartUp(
     public async Task PrepareAsync(bool loadDemo, CancellationToken ct)
     {
         BackupFile? taken = null;
-        if (File.Exists(backups.DatabasePath) && new FileInfo(backups.DatabasePath).Length > 0)
+        await clinic.EnsureMigrationHistoryAsync(ct).ConfigureAwait(false);
+        if (clinic.Database.IsServer())
+        {
+            if ((await clinic.Database.GetPendingMigrationsAsync(ct).ConfigureAwait(false)).Any()
+                && (await clinic.Database.GetAppliedMigrationsAsync(ct).ConfigureAwait(false)).Any())
+            {
+                AppLog.ServerBackupIsTheAdministrators(logger);
+            }
+        }
+        else if (File.Exists(backups.DatabasePath) && new FileInfo(backups.DatabasePath).Length > 0)
         {
             var hasSchema = (await clinic.Database.GetAppliedMigrationsAsync(ct).ConfigureAwait(false)).Any();
             var pending = (await clinic.Database.GetPendingMigrationsAsync(ct).ConfigureAwait(false)).Any();

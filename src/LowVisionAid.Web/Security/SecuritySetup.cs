@@ -33,7 +33,9 @@ internal static class SecuritySetup
         NetworkExposure.Validate(builder.Configuration, settings);
         builder.WebHost.ConfigureKestrel(o => o.AddServerHeader = false);
         var services = builder.Services;
-        services.AddOptions<AccessSettings>().BindConfiguration(AccessSettings.Section).ValidateOnStart();
+        services.AddOptions<AccessSettings>().BindConfiguration(AccessSettings.Section)
+            .PostConfigure<IOptions<ClinicDatabaseOptions>>((access, database) => access.SharedDatabase = database.Value.IsServer)
+            .ValidateOnStart();
         services.AddSingleton(sp => sp.GetRequiredService<IOptions<AccessSettings>>().Value);
         services.AddHttpContextAccessor();
 

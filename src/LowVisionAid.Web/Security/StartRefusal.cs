@@ -1,8 +1,8 @@
 namespace LowVisionAid.Web.Security;
 
 /// <summary>
-/// Stops the app before it starts when it is set to listen on a network address without <c>Access:AllowLan</c>:
-/// one paragraph on standard error saying what to set, and exit code <see cref="ExitCode"/>, with no stack trace.
+/// Stops the app before it starts when its database settings are unusable, or when it is set to listen on a network
+/// address without <c>Access:AllowLan</c>: one paragraph on standard error saying what to set, and exit code <see cref="ExitCode"/>, with no stack trace.
 /// </summary>
 internal static class StartRefusal
 {
@@ -13,7 +13,9 @@ internal static class StartRefusal
     public static int? Check(IConfiguration configuration, TextWriter error)
     {
         ArgumentNullException.ThrowIfNull(error);
-        if (NetworkExposure.Refusal(configuration, AccessSettings.From(configuration)) is not { } refusal)
+        var refusal = Infrastructure.ClinicDatabaseOptions.From(configuration).Problem()
+            ?? NetworkExposure.Refusal(configuration, AccessSettings.From(configuration));
+        if (refusal is null)
         {
             return null;
         }

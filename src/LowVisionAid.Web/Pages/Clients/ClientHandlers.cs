@@ -53,9 +53,9 @@ public sealed class NewClientHandler(ClinicDbContext db)
         {
             await db.SaveChangesAsync(ct).ConfigureAwait(false);
         }
-        catch (DbUpdateException e) when (e.InnerException is Microsoft.Data.Sqlite.SqliteException { SqliteExtendedErrorCode: 2067 })
+        catch (DbUpdateException e) when (e.IsDuplicateKey())
         {
-            // Two people saved the same new code at the same moment: the unique index let only one in (SQLITE_CONSTRAINT_UNIQUE).
+            // Two people saved the same new code at the same moment: the unique index let only one in.
             return new(null, CodeTaken);
         }
 
@@ -115,9 +115,9 @@ public sealed class EditClientHandler(ClinicDbContext db)
                 .Select(c => new { c.Version, c.UpdatedUtc }).FirstOrDefaultAsync(ct).ConfigureAwait(false);
             return current is null ? new(false, true, null, Guid.Empty, null) : new(false, false, null, current.Version, current.UpdatedUtc);
         }
-        catch (DbUpdateException e) when (e.InnerException is Microsoft.Data.Sqlite.SqliteException { SqliteExtendedErrorCode: 2067 })
+        catch (DbUpdateException e) when (e.IsDuplicateKey())
         {
-            // Another client took the same code at the same moment: the unique index let only one in (SQLITE_CONSTRAINT_UNIQUE).
+            // Another client took the same code at the same moment: the unique index let only one in.
             return new(false, false, NewClientHandler.CodeTaken, input.Version, null);
         }
     }
