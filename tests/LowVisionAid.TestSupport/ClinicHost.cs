@@ -12,12 +12,14 @@ namespace LowVisionAid.TestSupport;
 /// <summary>
 /// The one host fixture of the app tests: the real app in process over its own data folder, whose database starts as
 /// a copy of <see cref="TemplateDatabase"/> (already migrated), so no host applies the migrations again. The demo
-/// clinic is off unless asked for; the environment is Production unless set (no developer error pages); a test that
+/// clinic is off unless asked for; in the run against the test PostgreSQL server (<see cref="TestServer"/>) the host's
+/// database is its own database on that server instead; the environment is Production unless set (no developer error pages); a test that
 /// depends on today's date passes its own clock; logs go to the framework's fake collector when asked for.
 /// </summary>
 public class ClinicHost : WebApplicationFactory<Program>
 {
     private readonly bool _ownsDataFolder;
+    private string? _serverDatabase;
 
     // A test process starts dozens of hosts; each would watch its settings files and content folders with inotify,
     // and Linux allows 128 inotify instances per user across every process (more than one test project, or another
@@ -35,6 +37,9 @@ public class ClinicHost : WebApplicationFactory<Program>
         _ownsDataFolder = dataFolder is null;
         DataFolder = dataFolder ?? Path.Combine(Path.GetTempPath(), "lowvisionaid-tests", Guid.NewGuid().ToString("N"));
     }
+
+    /// <summary>This host's database on the test PostgreSQL server (its connection string), or null on SQLite.</summary>
+    public string? ServerDatabase => _serverDatabase;
 
     /// <summary>The folder that holds this host's database (the app's <c>DataFolder</c> setting).</summary>
     public string DataFolder { get; }
@@ -77,7 +82,14 @@ public class ClinicHost : WebApplicationFactory<Program>
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         ArgumentNullException.ThrowIfNull(builder);
-        if (UseTemplateDatabase)
+        if (TestServer.InUse && !Settings.ContainsKey("Database:Provider"))
+        {
+            // The run against the PostgreSQL server: this host's own database on it, migrated or empty as asked.
+            _serverDatabase ??= TestServer.CreateDatabase(migrated: UseTemplateDatabase);
+            builder.UseSetting("Database:Provider", nameof(DatabaseProvider.PostgreSql));
+            builder.UseSetting("Database:ConnectionString", _serverDatabase);
+        }
+        else if (UseTemplateDatabase)
         {
             TemplateDatabase.CopyTo(DataFolder);
         }
@@ -116,6 +128,12 @@ public class ClinicHost : WebApplicationFactory<Program>
     protected override void Dispose(bool disposing)
     {
         base.Dispose(disposing);
+        if (disposing && _serverDatabase is not null)
+        {
+            TestServer.DropDatabase(_serverDatabase);
+            _serverDatabase = null;
+        }
+
         if (disposing && _ownsDataFolder)
         {
             SqliteConnection.ClearAllPools();
