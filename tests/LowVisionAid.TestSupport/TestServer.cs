@@ -18,6 +18,12 @@ public static class TestServer
     /// <summary>The trait of tests about the SQLite file itself (its backups, restores, migrations and locks): not run on the server.</summary>
     public const string SqliteFileCategory = "SqliteFile";
 
+    /// <summary>
+    /// The trait of tests that need the server itself (two app processes on one database, pg_dump, moving a clinic to a
+    /// server): run only in the server pass. Run alone without the server they fail with <see cref="Require"/>'s message.
+    /// </summary>
+    public const string ServerOnlyCategory = "ServerOnly";
+
     private static readonly Lazy<Task<string>> Template = new(BuildTemplateAsync, LazyThreadSafetyMode.ExecutionAndPublication);
     private static readonly SemaphoreSlim Creating = new(1, 1);
 
@@ -26,6 +32,19 @@ public static class TestServer
 
     /// <summary>The provider the database tests of this run use.</summary>
     public static DatabaseProvider Provider => InUse ? DatabaseProvider.PostgreSql : DatabaseProvider.Sqlite;
+
+    /// <summary>Fails (never skips) a server-only test run without the server, saying how to run it.</summary>
+    public static void Require()
+    {
+        if (!InUse)
+        {
+            throw new InvalidOperationException(
+                $"This test needs the PostgreSQL test server: bash scripts/test-server.sh start /tmp/lva-pg, then set {ConnectionVariable} to the text of /tmp/lva-pg/connection (scripts/test.sh does both).");
+        }
+    }
+
+    /// <summary>The administrator's connection string of the test server (for pg_dump, psql and the like).</summary>
+    public static string AdministratorConnectionString => Administrator;
 
     private static string Administrator => Environment.GetEnvironmentVariable(ConnectionVariable)
         ?? throw new InvalidOperationException($"{ConnectionVariable} is not set: start a test server with scripts/test-server.sh and set it to the connection file's text.");
