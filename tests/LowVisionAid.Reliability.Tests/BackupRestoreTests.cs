@@ -1,3 +1,4 @@
+using LowVisionAid.TestSupport;
 using System.Net;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Audit;
@@ -10,6 +11,7 @@ using Microsoft.Extensions.DependencyInjection;
 namespace LowVisionAid.Reliability.Tests;
 
 /// <summary>Online backup, checked restore, and the automatic backup before a migration.</summary>
+[Trait("Category", TestServer.SqliteFileCategory)]   // backups of the SQLite file (a server is backed up with pg_dump)
 public sealed class BackupRestoreTests
 {
     [Fact]

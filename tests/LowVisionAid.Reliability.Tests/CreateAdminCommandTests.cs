@@ -1,3 +1,4 @@
+using LowVisionAid.TestSupport;
 using System.Diagnostics;
 using System.Net;
 using LowVisionAid.Data;
@@ -18,6 +19,7 @@ public sealed class CreateAdminCommandTests
     private const string Password = "a sentence long enough";
 
     [Fact]
+    [Trait("Category", TestServer.SqliteFileCategory)]   // the process opens the data folder's SQLite file
     [Trait("Category", "Slow")]
     public async Task Run_as_a_process_with_the_password_piped_it_creates_an_administrator_who_can_sign_in_and_exits_without_serving()
     {

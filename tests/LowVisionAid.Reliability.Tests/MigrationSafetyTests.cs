@@ -1,3 +1,4 @@
+using LowVisionAid.TestSupport;
 using System.Globalization;
 using System.Net;
 using LowVisionAid.Data;
@@ -19,6 +20,7 @@ namespace LowVisionAid.Reliability.Tests;
 /// history the two-context version kept), a database is built at that point and filled with rows in every table, then
 /// upgraded to the current schema as the app does at start: every value is still there.
 /// </summary>
+[Trait("Category", TestServer.SqliteFileCategory)]   // upgrading SQLite files of earlier versions
 public sealed class MigrationSafetyTests(ITestOutputHelper output)
 {
     private const int RowsPerTable = 3;

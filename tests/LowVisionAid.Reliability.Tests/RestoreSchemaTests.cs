@@ -1,3 +1,4 @@
+using LowVisionAid.TestSupport;
 using System.Net;
 using LowVisionAid.Data.Backup;
 using LowVisionAid.Reliability.Tests.Support;
@@ -14,6 +15,7 @@ namespace LowVisionAid.Reliability.Tests;
 /// history names; anything extra, missing or foreign is refused with what differs, and the live data is not touched.
 /// Every case goes through the upload form, as a person would restore a file.
 /// </summary>
+[Trait("Category", TestServer.SqliteFileCategory)]   // restoring a SQLite file
 public sealed class RestoreSchemaTests
 {
     public static TheoryData<string, string, string> Tampering() => new()

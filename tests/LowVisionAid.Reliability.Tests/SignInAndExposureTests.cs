@@ -136,8 +136,10 @@ public sealed class SignInAndExposureTests
         await Accounts.CreateFirstAdministratorAsync(client);
 
         var user = await app.ServiceAsync(async sp => (await sp.GetRequiredService<UserManager<IdentityUser>>().FindByNameAsync(Accounts.AdminName))!);
-        var databaseBytes = await File.ReadAllBytesAsync(app.Data.DatabasePath);
         var wal = app.Data.DatabasePath + "-wal";
+        var databaseBytes = app.ServerDatabase is null
+            ? await File.ReadAllBytesAsync(app.Data.DatabasePath)
+            : System.Text.Encoding.UTF8.GetBytes(string.Join('\n', DatabaseDump.Read(app).SelectMany(t => t.Value)));   // every row of the server database
         var walBytes = File.Exists(wal) ? await File.ReadAllBytesAsync(wal) : [];
 
         Assert.NotNull(user.PasswordHash);

@@ -1,4 +1,6 @@
 using LowVisionAid.Data;
+using LowVisionAid.Data.Access;
+using Microsoft.AspNetCore.Identity;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.AspNetCore.TestHost;
@@ -61,6 +63,26 @@ public class ClinicHost : WebApplicationFactory<Program>
 
     /// <summary>When set, every log line (Debug and up) goes here and nowhere else (the console stays quiet).</summary>
     public FakeLogCollector? LogCollector { get; init; }
+
+    /// <summary>The account a client of this host signs in as in the server pass (an administrator, made on first use).</summary>
+    public const string ServerPassAccount = "server.pass";
+
+    /// <summary>The password of <see cref="ServerPassAccount"/>.</summary>
+    public const string ServerPassPassword = "a shared database needs sign-in";
+
+    private readonly SemaphoreSlim _accountMade = new(1, 1);
+    private string? _signInCookie;
+
+    /// <summary>
+    /// On a server database sign-in is always required. So that the suites test the same pages in the server pass, each
+    /// client this host makes then signs in first as <see cref="ServerPassAccount"/>. False keeps clients signed out;
+    /// unset, it is false for a host whose settings already turn sign-in on (the tests of sign-in and accounts, which
+    /// make their own accounts and sign in themselves), true otherwise. No effect on SQLite.
+    /// </summary>
+    public bool? SignInOnServer { get; init; }
+
+    private bool SignsInOnServer => SignInOnServer ?? !new[] { "Access:RequireSignIn", "Access:AllowLan" }.Any(
+        key => Settings.TryGetValue(key, out var value) && string.Equals(value, "true", StringComparison.OrdinalIgnoreCase));
 
     /// <summary>A client that keeps cookies (for antiforgery) and does not follow redirects, as the tests want a browser.</summary>
     public HttpClient NewBrowserClient() => CreateClient(new WebApplicationFactoryClientOptions { AllowAutoRedirect = false, HandleCookies = true });
@@ -125,9 +147,87 @@ public class ClinicHost : WebApplicationFactory<Program>
         }
     }
 
+    protected override void ConfigureClient(HttpClient client)
+    {
+        ArgumentNullException.ThrowIfNull(client);
+        base.ConfigureClient(client);
+        if (_serverDatabase is not null && SignsInOnServer)
+        {
+            // The client may not send anything yet (the factory sets its address after this): it carries the sign-in
+            // cookie, got once per host through the app's own sign-in page, beside the cookies its own handler keeps.
+            client.DefaultRequestHeaders.Add("Cookie", Task.Run(SignInCookieAsync).GetAwaiter().GetResult());
+        }
+    }
+
+    private async Task<string> SignInCookieAsync()
+    {
+        await _accountMade.WaitAsync();
+        try
+        {
+            if (_signInCookie is not null)
+            {
+                return _signInCookie;
+            }
+
+            await using (var scope = Services.CreateAsyncScope())
+            {
+                var users = scope.ServiceProvider.GetRequiredService<UserManager<IdentityUser>>();
+                if (await users.FindByNameAsync(ServerPassAccount) is null)
+                {
+                    var user = new IdentityUser(ServerPassAccount);
+                    Check(await users.CreateAsync(user, ServerPassPassword));
+                    Check(await users.AddToRoleAsync(user, ClinicRoles.Administrator));
+                }
+            }
+
+            using var raw = Server.CreateClient();
+            using var page = await raw.GetAsync(new Uri("/Account/SignIn", UriKind.Relative));
+            var formCookies = CookiePairs(page);
+            using var post = new HttpRequestMessage(HttpMethod.Post, new Uri("/Account/SignIn", UriKind.Relative))
+            {
+                Content = new FormUrlEncodedContent(
+                [
+                    new("Input.UserName", ServerPassAccount),
+                    new("Input.Password", ServerPassPassword),
+                    new(PageHtml.TokenField, PageHtml.Token(await page.Content.ReadAsStringAsync()) ?? throw new InvalidOperationException("The sign-in page has no antiforgery token.")),
+                ]),
+            };
+            post.Headers.Add("Cookie", formCookies);
+            using var response = await raw.SendAsync(post);
+            var signedIn = CookiePairs(response);
+            if (response.StatusCode != System.Net.HttpStatusCode.Redirect || signedIn.Length == 0)
+            {
+                throw new InvalidOperationException($"The server pass could not sign in as {ServerPassAccount}: {(int)response.StatusCode}.");
+            }
+
+            return _signInCookie = signedIn;
+        }
+        finally
+        {
+            _accountMade.Release();
+        }
+    }
+
+    // "name=value; name=value" from a response's Set-Cookie headers.
+    private static string CookiePairs(HttpResponseMessage response) =>
+        string.Join("; ", response.Headers.TryGetValues("Set-Cookie", out var values) ? values.Select(v => v.Split(';')[0]).Where(v => !v.EndsWith('=')) : []);
+
+    private static void Check(IdentityResult result)
+    {
+        if (!result.Succeeded)
+        {
+            throw new InvalidOperationException("The server pass account was refused: " + string.Join("; ", result.Errors.Select(e => e.Description)));
+        }
+    }
+
     protected override void Dispose(bool disposing)
     {
         base.Dispose(disposing);
+        if (disposing)
+        {
+            _accountMade.Dispose();
+        }
+
         if (disposing && _serverDatabase is not null)
         {
             TestServer.DropDatabase(_serverDatabase);

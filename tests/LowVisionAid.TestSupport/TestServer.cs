@@ -15,7 +15,10 @@ public static class TestServer
     /// <summary>The environment variable with the test server's administrator connection string.</summary>
     public const string ConnectionVariable = "LVA_TEST_POSTGRES";
 
-    /// <summary>The trait of tests about the SQLite file itself (its backups, restores, migrations and locks): not run on the server.</summary>
+    /// <summary>
+    /// The trait of tests about the SQLite setup itself (its file, backups, restores, migrations and locks, its FTS5
+    /// index, sign-in off on one PC): not run in the server pass.
+    /// </summary>
     public const string SqliteFileCategory = "SqliteFile";
 
     /// <summary>

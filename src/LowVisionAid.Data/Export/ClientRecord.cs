@@ -54,6 +54,22 @@ public static class ClientRecord
     internal static string KeyColumn(IEntityType type) =>
         type.FindPrimaryKey()!.Properties[0].GetColumnName(StoreObjectIdentifier.Table(type.GetTableName()!, type.GetSchema()))!;
 
+    /// <summary>
+    /// A value as the export writes it, the same from either provider: SQLite hands back what it stores (integers as
+    /// long, times and keys as EF Core's text forms); PostgreSQL's typed values are put in those forms.
+    /// </summary>
+    public static object AsStored(object value) => value switch
+    {
+        int or short or byte => Convert.ToInt64(value, CultureInfo.InvariantCulture),
+        bool b => b ? 1L : 0L,
+        float f => (double)f,
+        DateTime t => t.ToString("yyyy-MM-dd HH:mm:ss.FFFFFFF", CultureInfo.InvariantCulture),
+        DateTimeOffset t => t.ToString("yyyy-MM-dd HH:mm:ss.FFFFFFFzzz", CultureInfo.InvariantCulture),
+        DateOnly d => d.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture),
+        Guid g => g.ToString().ToUpperInvariant(),
+        _ => value,
+    };
+
     private static async Task<List<RecordRow>> ReadRowsAsync(
         DbConnection connection, DbTransaction? transaction, IEntityType type, string whereColumn, long value, CancellationToken ct)
     {
@@ -75,7 +91,7 @@ public static class ClientRecord
                 long id = 0;
                 for (var i = 0; i < reader.FieldCount; i++)
                 {
-                    var cell = reader.IsDBNull(i) ? null : reader.GetValue(i);
+                    var cell = reader.IsDBNull(i) ? null : AsStored(reader.GetValue(i));
                     fields.Add(new(reader.GetName(i), cell));
                     if (string.Equals(reader.GetName(i), keyColumn, StringComparison.Ordinal))
                     {

@@ -15,7 +15,7 @@ internal static partial class AppLog
         Message = "LowVisionAid {Version} starting in {Environment}; data folder {DataFolder}; {Database}; {Access}")]
     public static partial void Starting(ILogger logger, string version, string environment, string dataFolder, string database, string access);
 
-    [LoggerMessage(EventId = 1002, Level = LogLevel.Information,
+    [LoggerMessage(EventId = 1005, Level = LogLevel.Information,
         Message = "The database is on a shared server: back it up with the server's own tools (pg_dump) before an upgrade; the app takes no backup of it.")]
     public static partial void ServerBackupIsTheAdministrators(ILogger logger);
 

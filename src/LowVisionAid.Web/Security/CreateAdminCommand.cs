@@ -117,7 +117,10 @@ internal static class CreateAdminCommand
             return Refused;
         }
 
-        await output.WriteLineAsync($"Administrator {name} created. Start the app with --Access:RequireSignIn=true (or --Access:AllowLan=true on the clinic network) and sign in as {name}; add the other staff under Admin > Users.").ConfigureAwait(false);
+        var next = scope.ServiceProvider.GetRequiredService<AccessSettings>().SharedDatabase
+            ? $"Start the app (sign-in is always on with a shared database) and sign in as {name}"
+            : $"Start the app with --Access:RequireSignIn=true (or --Access:AllowLan=true on the clinic network) and sign in as {name}";
+        await output.WriteLineAsync($"Administrator {name} created. {next}; add the other staff under Admin > Users.").ConfigureAwait(false);
         return Created;
     }
 

@@ -2,6 +2,7 @@ using System.Net;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.TestSupport;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Identity;
@@ -93,6 +94,7 @@ public sealed class RoleLinksTests
     }
 
     [Fact]
+    [Trait("Category", TestServer.SqliteFileCategory)]   // sign-in cannot be off with a server database
     public async Task With_sign_in_off_the_person_at_the_PC_sees_every_link_and_no_sign_in_or_sign_out()
     {
         using var app = new ClinicApp();

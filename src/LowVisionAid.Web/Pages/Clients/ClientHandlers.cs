@@ -20,8 +20,12 @@ public sealed class ClientListHandler(ClinicDbContext db)
     {
         var query = string.IsNullOrWhiteSpace(search) ? db.Clients.AsNoTracking() : ClientSearch.Matching(db, search).AsNoTracking();
 
-        return await ListPage.ReadAsync(query
-            .OrderByDescending(c => c.LastVisitDate).ThenBy(c => c.Code)
+        // Clients never seen come last. SQLite sorts a missing date last when descending, so its index serves the order
+        // as written; PostgreSQL sorts it first, so the server is told.
+        var ordered = db.Database.IsServer()
+            ? query.OrderBy(c => c.LastVisitDate == null).ThenByDescending(c => c.LastVisitDate)
+            : query.OrderByDescending(c => c.LastVisitDate);
+        return await ListPage.ReadAsync(ordered.ThenBy(c => c.Code)
             .Select(c => new ClientRow(c.Id, c.Code, c.Name, c.YearOfBirth, c.LastVisitDate, c.IsDemo)), page, PageSize, ct).ConfigureAwait(false);
     }
 }

@@ -4,6 +4,7 @@ using LowVisionAid.Data;
 using LowVisionAid.Data.Access;
 using LowVisionAid.Data.Audit;
 using LowVisionAid.Data.Entities;
+using LowVisionAid.TestSupport;
 using LowVisionAid.Web.Pages.Clients;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
@@ -67,7 +68,7 @@ public class ClientEditPageTests
         var audit = await scope.ServiceProvider.GetRequiredService<ClinicDbContext>().AuditEntries.AsNoTracking()
             .Where(a => a.RecordType == nameof(Client) && a.RecordId == id).ToListAsync();
         var changed = Assert.Single(audit, a => a.Action == AuditAction.Changed);
-        Assert.Equal(AuditActors.LocalUser, changed.Actor);
+        Assert.Equal(TestServer.InUse ? ClinicHost.ServerPassAccount : AuditActors.LocalUser, changed.Actor);   // sign-in is on with a server database
         var line = $"{changed.Actor} {changed.RecordType} {changed.RecordId} {changed.Detail}";
         Assert.DoesNotContain("E-000", line, StringComparison.Ordinal);
         Assert.DoesNotContain("crosswords", line, StringComparison.Ordinal);

@@ -1,5 +1,6 @@
 using LowVisionAid.Data;
 using LowVisionAid.Load;
+using LowVisionAid.TestSupport;
 using LowVisionAid.Web.Pages.Clients;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
@@ -30,7 +31,10 @@ public sealed class SyntheticClinicFixture : IAsyncLifetime
 /// answers as a reference computed in memory from the visits themselves, not from the stored columns). Results, not
 /// times: the times are measured by the load harness (docs/performance.md).
 /// </summary>
+// The synthetic clinic is written straight into the SQLite file (the load harness's generator), and the index it checks
+// is SQLite's FTS5 table; on a server the same searches go through the trigram index (ClientListTests, both passes).
 [Trait("Category", "Slow")]
+[Trait("Category", TestServer.SqliteFileCategory)]
 public sealed class ClientListAtScaleTests(SyntheticClinicFixture clinic) : IClassFixture<SyntheticClinicFixture>
 {
     [Fact]
