@@ -16,10 +16,13 @@ public sealed class AppProcess : IDisposable
     private readonly List<(string Text, TaskCompletionSource Seen)> _watches = [];
     private bool _disposed;
 
-    private AppProcess(Process process, Uri address)
+    private readonly string _readyPath;
+
+    private AppProcess(Process process, Uri address, string readyPath)
     {
         _process = process;
         Address = address;
+        _readyPath = readyPath;
     }
 
     public Uri Address { get; }
@@ -47,8 +50,13 @@ public sealed class AppProcess : IDisposable
         return ((IPEndPoint)listener.LocalEndpoint).Port;
     }
 
-    /// <summary>Starts the app; <paramref name="waitUntilReady"/> polls GET / until it answers (at most <paramref name="timeout"/>).</summary>
-    public static async Task<AppProcess> StartAsync(string dataFolder, bool loadDemo, TimeSpan timeout, bool waitUntilReady = true)
+    /// <summary>
+    /// Starts the app; <paramref name="waitUntilReady"/> polls GET <paramref name="readyPath"/> until it answers 200 (at
+    /// most <paramref name="timeout"/>). <paramref name="environment"/> adds settings as environment variables (such as
+    /// <c>Database__ConnectionString</c>, whose password must not appear on a command line).
+    /// </summary>
+    public static async Task<AppProcess> StartAsync(
+        string dataFolder, bool loadDemo, TimeSpan timeout, bool waitUntilReady = true, IReadOnlyDictionary<string, string>? environment = null, string readyPath = "/")
     {
         var dll = WebAssemblyPath();
         var port = FreeLoopbackPort();
@@ -67,9 +75,14 @@ public sealed class AppProcess : IDisposable
 
         start.Environment["ASPNETCORE_ENVIRONMENT"] = "Production";
         start.Environment["DOTNET_gcServer"] = "0";
+        foreach (var (name, value) in environment ?? new Dictionary<string, string>())
+        {
+            start.Environment[name] = value;
+        }
+
         // Both pipes are always read to the end: an unread pipe fills and blocks the app's next write to its console.
         var process = Process.Start(start)!;
-        var app = new AppProcess(process, address);
+        var app = new AppProcess(process, address, readyPath);
         process.OutputDataReceived += (_, e) => app.Received(e.Data);
         process.ErrorDataReceived += (_, e) => app.Received(e.Data);
         process.BeginOutputReadLine();
@@ -141,7 +154,7 @@ public sealed class AppProcess : IDisposable
 
             try
             {
-                using var response = await http.GetAsync(new Uri("/", UriKind.Relative));
+                using var response = await http.GetAsync(new Uri(_readyPath, UriKind.Relative));
                 if (response.StatusCode == HttpStatusCode.OK)
                 {
                     return;

@@ -1,16 +1,21 @@
 using LowVisionAid.Data;
 using LowVisionAid.Data.Backup;
+using LowVisionAid.Web.Infrastructure;
 using LowVisionAid.Web.Security;
 using Microsoft.AspNetCore.Mvc;
+using Microsoft.AspNetCore.Mvc.Filters;
 using Microsoft.AspNetCore.Mvc.RazorPages;
 
 namespace LowVisionAid.Web.Pages.Admin;
 
 [RequestSizeLimit(MaxUploadBytes)]
 [RequestFormLimits(MultipartBodyLengthLimit = MaxUploadBytes)]
-public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic) : PageModel
+public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic, ClinicDatabaseTarget target, ClinicCalendar calendar) : PageModel
 {
     public const long MaxUploadBytes = 1L << 30;
+
+    /// <summary>How to back up the clinic's PostgreSQL server (pg_dump, pg_restore); null when the clinic is on its SQLite file.</summary>
+    public ServerBackupAdvice? Server { get; } = target.IsServer ? new ServerBackupAdvice(target.ConnectionString, calendar.Today) : null;
 
     public IReadOnlyList<BackupFile> Files { get; private set; } = [];
 
@@ -26,7 +31,23 @@ public sealed class BackupModel(DatabaseBackups backups, ClinicDbContext clinic)
     [BindProperty]
     public bool Confirm { get; set; }
 
-    public void OnGet() => Files = backups.List();
+    public void OnGet() => Files = Server is null ? backups.List() : [];
+
+    /// <summary>
+    /// On a server database no handler runs: taking, restoring and uploading backups are about the SQLite file, so a
+    /// post (a stale form, a typed request) gets the page with the refusal and a 409, and nothing is changed.
+    /// </summary>
+    public override void OnPageHandlerExecuting(PageHandlerExecutingContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        if (Server is not null && HttpMethods.IsPost(context.HttpContext.Request.Method))
+        {
+            Problem = ServerBackupAdvice.Refusal;
+            var page = Page();
+            page.StatusCode = StatusCodes.Status409Conflict;
+            context.Result = page;
+        }
+    }
 
     public async Task<IActionResult> OnPostTakeAsync([FromServices] TakeBackupHandler handler, CancellationToken ct)
     {
