@@ -1,4 +1,3 @@
-using System.Text.RegularExpressions;
 using Npgsql;
 
 namespace LowVisionAid.Web.Pages.Admin;
@@ -147,9 +146,9 @@ public sealed partial class ServerBackupAdvice
         return arguments;
     }
 
+    // Letters, digits and the punctuation of host names, paths and options go as they are; anything else is quoted.
     private static string Quote(string argument) =>
-        PlainArgument().IsMatch(argument) ? argument : "\"" + argument.Replace("\"", "\\\"", StringComparison.Ordinal) + "\"";
-
-    [GeneratedRegex("^[A-Za-z0-9_./:=@%+,-]+$")]
-    private static partial Regex PlainArgument();
+        argument.Length > 0 && argument.All(c => char.IsAsciiLetterOrDigit(c) || "_./:=@%+,-".Contains(c, StringComparison.Ordinal))
+            ? argument
+            : "\"" + argument.Replace("\"", "\\\"", StringComparison.Ordinal) + "\"";
 }
