@@ -17,34 +17,8 @@ internal sealed record MoveCommandLine(string? To, string[] HostArgs)
     /// <c>move-to-server --to &lt;connection string&gt; [host settings such as --DataFolder &lt;path&gt;]</c>, or null
     /// when the first argument is not the command. The target never goes to the host's configuration.
     /// </summary>
-    public static MoveCommandLine? Parse(string[] args)
-    {
-        ArgumentNullException.ThrowIfNull(args);
-        if (args.Length == 0 || !string.Equals(args[0], Command, StringComparison.Ordinal))
-        {
-            return null;
-        }
-
-        string? to = null;
-        var host = new List<string>();
-        for (var i = 1; i < args.Length; i++)
-        {
-            if (string.Equals(args[i], ToOption, StringComparison.Ordinal) && i + 1 < args.Length)
-            {
-                to = args[++i];
-            }
-            else if (args[i].StartsWith(ToOption + "=", StringComparison.Ordinal))
-            {
-                to = args[i][(ToOption.Length + 1)..];
-            }
-            else
-            {
-                host.Add(args[i]);
-            }
-        }
-
-        return new MoveCommandLine(to, [.. host]);
-    }
+    public static MoveCommandLine? Parse(string[] args) =>
+        CommandLineCommand.Take(args, Command, ToOption) is { } taken ? new MoveCommandLine(taken.Value, taken.HostArgs) : null;
 }
 
 /// <summary>
