@@ -183,6 +183,36 @@ public sealed class MoveToServerTests
 
     [Fact]
     [Trait("Category", "ServerOnly")]
+    public async Task A_database_of_another_application_is_refused_before_any_table_is_added_to_it()
+    {
+        TestServer.Require();
+        using var data = new TempFolder("move-foreign");
+        var target = TestServer.CreateDatabase(migrated: false);
+        try
+        {
+            using var source = new ClinicApp("move-foreign", loadDemo: true, settings: OnSqlite, data: data);
+            _ = source.Services;
+            await using (var connection = new NpgsqlConnection(target))
+            {
+                await connection.OpenAsync();
+                await using var create = new NpgsqlCommand("CREATE TABLE invoices (id integer PRIMARY KEY)", connection);
+                await create.ExecuteNonQueryAsync();
+            }
+
+            var report = await ClinicMove.ToServerAsync(data.DatabasePath, target);
+
+            Assert.Equal(MoveOutcome.Refused, report.Outcome);
+            Assert.Contains("holds tables that are not LowVisionAid's (public.invoices); nothing was copied", report.Message, StringComparison.Ordinal);
+            Assert.Equal(["invoices"], await TableNamesAsync(target));
+        }
+        finally
+        {
+            TestServer.DropDatabase(target);
+        }
+    }
+
+    [Fact]
+    [Trait("Category", "ServerOnly")]
     public async Task A_row_the_server_cannot_store_rolls_the_whole_copy_back_and_leaves_the_target_empty()
     {
         TestServer.Require();
