@@ -1,9 +1,12 @@
 using LowVisionAid.Web.Infrastructure;
+using LowVisionAid.Web.Moving;
 using LowVisionAid.Web.Security;
 
-// `create-admin --user <name>` creates an administrator and exits without starting the server (docs/security.md).
+// `create-admin --user <name>` creates an administrator and exits without starting the server (docs/security.md);
+// `move-to-server --to <connection string>` copies the clinic's SQLite file to a PostgreSQL server (docs/moving-to-server.md).
 var adminCommand = AdminCommandLine.Parse(args);
-var builder = WebApplication.CreateBuilder(adminCommand?.HostArgs ?? args);
+var moveCommand = MoveCommandLine.Parse(args);
+var builder = WebApplication.CreateBuilder(adminCommand?.HostArgs ?? moveCommand?.HostArgs ?? args);
 
 // Listen on loopback only unless configured otherwise: the app holds health information.
 if (string.IsNullOrEmpty(builder.Configuration["urls"]) && string.IsNullOrEmpty(builder.Configuration["ASPNETCORE_URLS"]))
@@ -18,7 +21,7 @@ if (StartRefusal.Check(builder.Configuration, Console.Error) is { } refused)
 }
 
 // Settings: appsettings.json lists every one with its default; each concern binds its own section and is checked at start.
-builder.AddClinicLogging(quietConsole: adminCommand is not null);   // Logging:LogLevel, one line per request, rolling file in the data folder
+builder.AddClinicLogging(quietConsole: adminCommand is not null || moveCommand is not null);   // Logging:LogLevel, one line per request, rolling file in the data folder
 builder.AddClinicData();                    // DataFolder, BackupFolder, LoadDemoClinic; SQLite, backups, database start-up
 builder.AddClinicPages();                   // the clinic-flow pages, their validators and handlers (one list, by feature)
 builder.AddClinicSecurity();                // loopback unless Access:AllowLan, sign-in and roles, cookie keys, audit trail
@@ -31,6 +34,11 @@ var app = builder.Build();
 if (adminCommand is not null)
 {
     return await CreateAdminCommand.RunAsync(app.Services, adminCommand, CreateAdminCommand.ReadFromConsole, askTwice: !Console.IsInputRedirected, Console.Out, Console.Error, CancellationToken.None).ConfigureAwait(false);
+}
+
+if (moveCommand is not null)
+{
+    return await MoveToServerCommand.RunAsync(app.Services, moveCommand, Console.Out, Console.Error, CancellationToken.None).ConfigureAwait(false);
 }
 
 app.LogStarting();

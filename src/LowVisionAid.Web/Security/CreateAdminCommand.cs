@@ -16,34 +16,8 @@ internal sealed record AdminCommandLine(string? UserName, string[] HostArgs)
     /// <c>create-admin --user &lt;name&gt; [host settings such as --DataFolder &lt;path&gt;]</c>, or null when the
     /// first argument is not the command (the web app then starts as usual). The password is never an argument.
     /// </summary>
-    public static AdminCommandLine? Parse(string[] args)
-    {
-        ArgumentNullException.ThrowIfNull(args);
-        if (args.Length == 0 || !string.Equals(args[0], Command, StringComparison.Ordinal))
-        {
-            return null;
-        }
-
-        string? user = null;
-        var host = new List<string>();
-        for (var i = 1; i < args.Length; i++)
-        {
-            if (string.Equals(args[i], UserOption, StringComparison.Ordinal) && i + 1 < args.Length)
-            {
-                user = args[++i];
-            }
-            else if (args[i].StartsWith(UserOption + "=", StringComparison.Ordinal))
-            {
-                user = args[i][(UserOption.Length + 1)..];
-            }
-            else
-            {
-                host.Add(args[i]);
-            }
-        }
-
-        return new AdminCommandLine(user, [.. host]);
-    }
+    public static AdminCommandLine? Parse(string[] args) =>
+        CommandLineCommand.Take(args, Command, UserOption) is { } taken ? new AdminCommandLine(taken.Value, taken.HostArgs) : null;
 }
 
 /// <summary>
