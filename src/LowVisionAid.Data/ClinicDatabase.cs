@@ -84,6 +84,25 @@ public static class ClinicDatabase
         error?.InnerException is SqliteException { SqliteExtendedErrorCode: 2067 } or PostgresException { SqlState: PostgresErrorCodes.UniqueViolation };
 
     /// <summary>
+    /// What is wrong with a PostgreSQL connection string given as <paramref name="setting"/>, said as what to type instead;
+    /// null when it names a server and a database. Never echoes the value (it may hold a password).
+    /// </summary>
+    public static string? ServerConnectionProblem(string connectionString, string setting)
+    {
+        try
+        {
+            var server = new NpgsqlConnectionStringBuilder(connectionString);
+            return string.IsNullOrWhiteSpace(server.Host) || string.IsNullOrWhiteSpace(server.Database)
+                ? $"{setting} must name the server and the database, such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid."
+                : null;
+        }
+        catch (ArgumentException)
+        {
+            return $"{setting} is not a PostgreSQL connection string. Give Key=Value pairs separated by ';', such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid.";
+        }
+    }
+
+    /// <summary>
     /// Where the database is, for people and logs: the file, or the server's host, port and database. Never the password.
     /// </summary>
     public static string Describe(DatabaseProvider provider, string connectionString) =>

@@ -1,5 +1,4 @@
 using LowVisionAid.Data;
-using Npgsql;
 
 namespace LowVisionAid.Web.Infrastructure;
 
@@ -44,18 +43,7 @@ public sealed class ClinicDatabaseOptions
             return "Database:Provider is PostgreSql but Database:ConnectionString is empty. Give the server's, such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid;Password=…;SSL Mode=Require.";
         }
 
-        try
-        {
-            var server = new NpgsqlConnectionStringBuilder(ConnectionString);
-            return string.IsNullOrWhiteSpace(server.Host) || string.IsNullOrWhiteSpace(server.Database)
-                ? "Database:ConnectionString must name the server and the database, such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid;Password=…."
-                : null;
-        }
-        catch (ArgumentException)
-        {
-            // The message would echo the setting, password included: say only what shape it must have.
-            return "Database:ConnectionString is not a PostgreSQL connection string. Give Key=Value pairs separated by ';', such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid;Password=….";
-        }
+        return ClinicDatabase.ServerConnectionProblem(ConnectionString, "Database:ConnectionString");
     }
 
     /// <summary>The section as bound at start, for the decisions made before the services exist.</summary>

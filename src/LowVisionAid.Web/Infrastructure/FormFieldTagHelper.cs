@@ -24,7 +24,7 @@ public sealed class FormFieldTagHelper(IHtmlGenerator generator) : TagHelper
 
     public string? Hint { get; set; }
 
-    /// <summary>text (default), textarea, select, checkbox, date or number.</summary>
+    /// <summary>text (default), textarea, select, checkbox, date, number or password (never filled in again).</summary>
     public string Kind { get; set; } = "text";
 
     public string? Autocomplete { get; set; }
@@ -86,7 +86,8 @@ public sealed class FormFieldTagHelper(IHtmlGenerator generator) : TagHelper
 
         output.TagName = "div";
         output.TagMode = TagMode.StartTagAndEndTag;
-        output.Attributes.SetAttribute("class", errors.Count > 0 ? $"field field-{Kind} field-invalid" : $"field field-{Kind}");
+        var look = Kind == "password" ? "text" : Kind;   // a password field looks like a text field
+        output.Attributes.SetAttribute("class", errors.Count > 0 ? $"field field-{look} field-invalid" : $"field field-{look}");
 
         var label = new TagBuilder("label");
         label.Attributes["for"] = id;
@@ -97,6 +98,7 @@ public sealed class FormFieldTagHelper(IHtmlGenerator generator) : TagHelper
             "textarea" => generator.GenerateTextArea(ViewContext, For.ModelExplorer, For.Name, rows: 4, columns: 0, attributes),
             "select" => generator.GenerateSelect(ViewContext, For.ModelExplorer, optionLabel: null, For.Name, Items ?? [], allowMultiple: false, attributes),
             "checkbox" => generator.GenerateCheckBox(ViewContext, For.ModelExplorer, For.Name, isChecked: null, attributes),
+            "password" => generator.GeneratePassword(ViewContext, For.ModelExplorer, For.Name, value: null, attributes),
             _ => TextBox(attributes),
         };
 

@@ -105,17 +105,7 @@ internal static class MoveToServerCommand
             return "Name the PostgreSQL database to move into: move-to-server --to \"Host=…;Database=…;Username=…\".";
         }
 
-        try
-        {
-            var server = new NpgsqlConnectionStringBuilder(to);
-            return string.IsNullOrWhiteSpace(server.Host) || string.IsNullOrWhiteSpace(server.Database)
-                ? "--to must name the server and the database, such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid."
-                : null;
-        }
-        catch (ArgumentException)
-        {
-            return "--to is not a PostgreSQL connection string. Give Key=Value pairs separated by ';', such as Host=clinic-server;Database=lowvisionaid;Username=lowvisionaid.";
-        }
+        return ClinicDatabase.ServerConnectionProblem(to, "--to");
     }
 
     /// <summary>One line per table: its name, its rows in the file and on the server, the start of each checksum, and whether they match.</summary>

@@ -64,7 +64,7 @@ internal static class CreateAdminCommand
             return Refused;
         }
 
-        var password = readSecret($"Password for {name} (at least 10 characters; a short sentence is good; not shown): ");
+        var password = readSecret($"Password for {name} (at least {PasswordRules.MinimumLength} characters; a short sentence is good; not shown): ");
         if (password is null)
         {
             await errors.WriteLineAsync("No password was given on standard input; nothing was changed. Type it when asked, or pipe it as one line.").ConfigureAwait(false);

@@ -54,7 +54,7 @@ internal static class SecuritySetup
         // Sign-in: ASP.NET Core Identity on EF Core (PBKDF2-hashed passwords, lockout after repeated failures).
         services.AddIdentity<IdentityUser, IdentityRole>(o =>
             {
-                o.Password.RequiredLength = 10;
+                o.Password.RequiredLength = PasswordRules.MinimumLength;
                 o.Password.RequireDigit = false;
                 o.Password.RequireLowercase = false;
                 o.Password.RequireUppercase = false;

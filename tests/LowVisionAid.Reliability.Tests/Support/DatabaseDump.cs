@@ -1,3 +1,4 @@
+using System.Data.Common;
 using System.Globalization;
 using Microsoft.Data.Sqlite;
 using Npgsql;
@@ -36,10 +37,21 @@ public static class DatabaseDump
     {
         using var connection = new NpgsqlConnection(new NpgsqlConnectionStringBuilder(connectionString) { Pooling = false }.ConnectionString);
         connection.Open();
+        return ReadTables(
+            connection,
+            "SELECT table_name FROM information_schema.tables WHERE table_schema = 'public' AND table_type = 'BASE TABLE' AND table_name <> '__EFMigrationsLock' ORDER BY table_name",
+            orderBy: "",
+            AsSqliteText,
+            skipTables);
+    }
+
+    private static SortedDictionary<string, List<string>> ReadTables(
+        DbConnection connection, string listTables, string orderBy, Func<object, string?> text, string[] skipTables)
+    {
         var tables = new List<string>();
         using (var list = connection.CreateCommand())
         {
-            list.CommandText = "SELECT table_name FROM information_schema.tables WHERE table_schema = 'public' AND table_type = 'BASE TABLE' AND table_name <> '__EFMigrationsLock' ORDER BY table_name";
+            list.CommandText = listTables;
             using var reader = list.ExecuteReader();
             while (reader.Read())
             {
@@ -51,16 +63,20 @@ public static class DatabaseDump
         foreach (var table in tables.Where(t => !skipTables.Contains(t)))
         {
             using var select = connection.CreateCommand();
-            select.CommandText = $"SELECT * FROM \"{table}\"";
+            select.CommandText = $"SELECT * FROM \"{table}\" {orderBy}";
             using var reader = select.ExecuteReader();
             var rows = new List<string>();
             while (reader.Read())
             {
                 rows.Add(string.Join('|', Enumerable.Range(0, reader.FieldCount).Select(i =>
-                    reader.GetName(i) + "=" + (reader.IsDBNull(i) ? "NULL" : AsSqliteText(reader.GetValue(i))))));
+                    reader.GetName(i) + "=" + (reader.IsDBNull(i) ? "NULL" : text(reader.GetValue(i))))));
             }
 
-            rows.Sort(StringComparer.Ordinal);
+            if (orderBy.Length == 0)
+            {
+                rows.Sort(StringComparer.Ordinal);
+            }
+
             dump[table] = rows;
         }
 
@@ -82,35 +98,14 @@ public static class DatabaseDump
     {
         using var connection = new SqliteConnection(new SqliteConnectionStringBuilder { DataSource = path, Mode = SqliteOpenMode.ReadOnly, Pooling = false }.ToString());
         connection.Open();
-        var tables = new List<string>();
-        using (var list = connection.CreateCommand())
-        {
-            // Ordinary tables only: a full-text index (a virtual table and its shadow tables) is derived from them.
-            list.CommandText = "SELECT name FROM pragma_table_list WHERE schema = 'main' AND type = 'table' AND name NOT LIKE 'sqlite_%' AND name <> '__EFMigrationsLock' ORDER BY name";
-            using var reader = list.ExecuteReader();
-            while (reader.Read())
-            {
-                tables.Add(reader.GetString(0));
-            }
-        }
 
-        var dump = new SortedDictionary<string, List<string>>(StringComparer.Ordinal);
-        foreach (var table in tables.Where(t => !skipTables.Contains(t)))
-        {
-            using var select = connection.CreateCommand();
-            select.CommandText = $"SELECT * FROM \"{table}\" ORDER BY rowid";
-            using var reader = select.ExecuteReader();
-            var rows = new List<string>();
-            while (reader.Read())
-            {
-                rows.Add(string.Join('|', Enumerable.Range(0, reader.FieldCount).Select(i =>
-                    reader.GetName(i) + "=" + (reader.IsDBNull(i) ? "NULL" : Convert.ToString(reader.GetValue(i), CultureInfo.InvariantCulture)))));
-            }
-
-            dump[table] = rows;
-        }
-
-        return dump;
+        // Ordinary tables only: a full-text index (a virtual table and its shadow tables) is derived from them.
+        return ReadTables(
+            connection,
+            "SELECT name FROM pragma_table_list WHERE schema = 'main' AND type = 'table' AND name NOT LIKE 'sqlite_%' AND name <> '__EFMigrationsLock' ORDER BY name",
+            orderBy: "ORDER BY rowid",
+            value => Convert.ToString(value, CultureInfo.InvariantCulture),
+            skipTables);
     }
 
     public static int RowCount(SortedDictionary<string, List<string>> dump) => dump.Values.Sum(r => r.Count);

@@ -18,13 +18,13 @@ public sealed class ChangePasswordInput
 /// <summary>What a password change needs before Identity checks the current password.</summary>
 public sealed class ChangePasswordInputValidator : AbstractValidator<ChangePasswordInput>
 {
-    public const int MinimumLength = 10;
+    public const int MinimumLength = PasswordRules.MinimumLength;
 
     public ChangePasswordInputValidator()
     {
         RuleFor(i => i.CurrentPassword).NotEmpty().WithMessage("Type your current password.");
         RuleFor(i => i.NewPassword).MinimumLength(MinimumLength)
-            .WithMessage($"Type a new password of at least {MinimumLength} characters; a short sentence is easy to remember and hard to guess.");
+            .WithMessage(PasswordRules.TooShort("a new password"));
     }
 }
 

@@ -34,9 +34,9 @@ public sealed class NewAccountHandler(UserManager<IdentityUser> users, RoleManag
             errors.Add(new(nameof(NewAccountInput.UserName), $"Type a user name of 1 to {MaxUserName} letters, digits, dots, dashes or underscores, such as a.khan."));
         }
 
-        if (input.Password.Length < 10)
+        if (input.Password.Length < PasswordRules.MinimumLength)
         {
-            errors.Add(new(nameof(NewAccountInput.Password), "Type a password of at least 10 characters; a short sentence is easy to remember and hard to guess."));
+            errors.Add(new(nameof(NewAccountInput.Password), PasswordRules.TooShort("a password")));
         }
 
         if (!ClinicRoles.All.Contains(input.Role))
