@@ -5,7 +5,7 @@ using System.Net.Sockets;
 namespace LowVisionAid.Load;
 
 /// <summary>
-/// The app as a clinic runs it: its own process (the Release build of LowVisionAid.Web), on 127.0.0.1 and a free
+/// The app as a clinic runs it: its own process (the published build of LowVisionAid.Web), on 127.0.0.1 and a free
 /// port, on a given data folder, in the Production environment. Stopped with SIGINT (a clean shutdown), killed if
 /// it has not stopped within ten seconds.
 /// </summary>
@@ -45,14 +45,21 @@ public sealed class AppProcess : IAsyncDisposable
         }
     }
 
+    // The content root, where wwwroot is: a published app's own folder; for a build in bin/Release/net10.0, the
+    // project folder, as `dotnet run` uses.
+    private static string ContentRoot(string webDll)
+    {
+        var folder = Path.GetDirectoryName(Path.GetFullPath(webDll))!;
+        return Directory.Exists(Path.Combine(folder, "wwwroot")) ? folder : Path.GetFullPath(Path.Combine(folder, "..", "..", ".."));
+    }
+
     public static async Task<AppProcess> StartAsync(string webDll, string dataFolder, bool loadDemo)
     {
         var port = FreeLoopbackPort();
         var address = new Uri($"http://127.0.0.1:{port}/");
         var info = new ProcessStartInfo("dotnet")
         {
-            // The project folder, as `dotnet run` uses: the content root, where wwwroot is.
-            WorkingDirectory = Path.GetFullPath(Path.Combine(Path.GetDirectoryName(webDll)!, "..", "..", "..")),
+            WorkingDirectory = ContentRoot(webDll),
             RedirectStandardOutput = true,
             RedirectStandardError = true,
             UseShellExecute = false,

@@ -3,7 +3,8 @@ using System.Globalization;
 namespace LowVisionAid.Load;
 
 /// <summary>The harness's settings, from its command line.</summary>
-public sealed record Options(string Out, int Requests, SyntheticSize Size, bool Reuse = false)
+/// <param name="App">The LowVisionAid.Web.dll to run; null for the Release build in the project's bin folder.</param>
+public sealed record Options(string Out, int Requests, SyntheticSize Size, bool Reuse = false, string? App = null)
 {
     public static Options Parse(string[] args)
     {
@@ -22,7 +23,8 @@ public sealed record Options(string Out, int Requests, SyntheticSize Size, bool 
             values.GetValueOrDefault("out", "test-artifacts/load"),
             Number("requests", 200),
             new SyntheticSize(Number("clients", size.Clients), Number("visits", size.Visits), Number("plans", size.Plans), Number("trials", size.Trials)),
-            values.TryGetValue("reuse", out var reuse) && bool.Parse(reuse));
+            values.TryGetValue("reuse", out var reuse) && bool.Parse(reuse),
+            values.GetValueOrDefault("app"));
     }
 
     /// <summary>The folder that holds LowVisionAid.sln, found from the working folder upwards.</summary>

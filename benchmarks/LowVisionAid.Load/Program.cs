@@ -2,8 +2,10 @@ using System.Globalization;
 using System.Text;
 using LowVisionAid.Load;
 
-// The load and scale harness: `bash scripts/load.sh` builds the app in Release and runs `all` (docs/performance.md).
-//   all [--out DIR] [--requests N] [--clients N] [--visits N] [--plans N] [--trials N] [--reuse true]
+// The load and scale harness: `bash scripts/load.sh` publishes the app as a clinic installs it (Release, ReadyToRun)
+// and runs `all` (docs/performance.md).
+//   all [--app DLL] [--out DIR] [--requests N] [--clients N] [--visits N] [--plans N] [--trials N] [--reuse true]
+// --app names the LowVisionAid.Web.dll to run (the published one from scripts/load.sh; else the Release build).
 // --reuse true keeps DIR/demo and DIR/scale from an earlier run (no empty-folder start, no generation): the same
 // databases measured again, e.g. on a quieter machine.
 // Makes DIR/demo (the demo clinic, from an empty folder) and DIR/scale (the demo clinic plus a synthetic clinic),
@@ -13,10 +15,10 @@ var culture = CultureInfo.InvariantCulture;
 void Say(string line) => Console.WriteLine(string.Create(culture, $"{DateTime.UtcNow:HH:mm:ss} {line}"));
 
 var root = Options.RepositoryRoot();
-var webDll = Path.Combine(root, "src", "LowVisionAid.Web", "bin", "Release", "net10.0", "LowVisionAid.Web.dll");
+var webDll = options.App is { } app ? Path.GetFullPath(app, root) : Path.Combine(root, "src", "LowVisionAid.Web", "bin", "Release", "net10.0", "LowVisionAid.Web.dll");
 if (!File.Exists(webDll))
 {
-    Console.Error.WriteLine($"Build the app in Release first (dotnet build src/LowVisionAid.Web -c Release): {webDll} is missing.");
+    Console.Error.WriteLine($"Publish the app first (bash scripts/load.sh does) or build it in Release (dotnet build src/LowVisionAid.Web -c Release): {webDll} is missing.");
     return 2;
 }
 
@@ -66,7 +68,7 @@ Say("load on the synthetic clinic");
 var (scaleStarts, scale, scalePeak) = await StartsThenLoadAsync(scaleFolder);
 
 var loadAfter = File.ReadAllText("/proc/loadavg").Trim();
-var report = Report.Write(options, loadBefore, loadAfter, emptyStart, demoStarts, scaleStarts, generated, dbBytes, demo, scale, demoPeak, scalePeak);
+var report = Report.Write(options, webDll, loadBefore, loadAfter, emptyStart, demoStarts, scaleStarts, generated, dbBytes, demo, scale, demoPeak, scalePeak);
 var resultsFile = Path.Combine(output, "results.md");
 File.WriteAllText(resultsFile, report, Encoding.UTF8);
 Console.WriteLine(report);

@@ -6,7 +6,7 @@ namespace LowVisionAid.Load;
 /// <summary>The results as Markdown, ready to paste into docs/performance.md.</summary>
 public static class Report
 {
-    public static string Write(Options options, string loadBefore, string loadAfter, TimeSpan emptyStart, IReadOnlyList<TimeSpan> demoStarts, IReadOnlyList<TimeSpan> scaleStarts,
+    public static string Write(Options options, string app, string loadBefore, string loadAfter, TimeSpan emptyStart, IReadOnlyList<TimeSpan> demoStarts, IReadOnlyList<TimeSpan> scaleStarts,
         TimeSpan generated, long dbBytes, IReadOnlyList<CellResult> demo, IReadOnlyList<CellResult> scale, long demoPeak, long scalePeak)
     {
         ArgumentNullException.ThrowIfNull(options);
@@ -15,6 +15,7 @@ public static class Report
         s.AppendLine(c, $"Run at {DateTime.UtcNow:yyyy-MM-dd HH:mm} UTC on {Environment.ProcessorCount} cores; load average before {loadBefore}, after {loadAfter}.");
         var made = options.Reuse && generated == TimeSpan.Zero ? "reused from an earlier run" : $"made in {generated.TotalSeconds:0} s";
         s.AppendLine(c, $"Synthetic clinic: {options.Size.Clients:N0} clients, {options.Size.Visits:N0} visits, {options.Size.Plans:N0} plans, {options.Size.Trials:N0} trials, {made} ({dbBytes / 1048576.0:0} MB). {options.Requests} requests per cell after 5 warm-up requests.");
+        s.AppendLine(c, $"App: {app}.");
         s.AppendLine();
         s.AppendLine(c, $"Start to first page: empty folder (database made, demo loaded) {(emptyStart == TimeSpan.Zero ? "not measured (reused)" : Ms(emptyStart))}; existing demo database {string.Join(", ", demoStarts.Select(Ms))}; existing database at scale {string.Join(", ", scaleStarts.Select(Ms))}.");
         s.AppendLine(c, $"Peak working set: demo {demoPeak / 1048576.0:0} MB, at scale {scalePeak / 1048576.0:0} MB.");
