@@ -26,6 +26,7 @@ public sealed class AuditAndPrivacyTests
     private static readonly string[] Secrets = [Code, Name, Notes, Practitioner, Acuity, NearPrint, WorkingDistance, Comment, "1937"];
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task The_main_flow_leaves_no_client_name_code_or_clinical_value_in_the_logs_or_the_audit_trail()
     {
         // Arrange
@@ -77,6 +78,7 @@ public sealed class AuditAndPrivacyTests
         : line.Contains(secret, StringComparison.OrdinalIgnoreCase);
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Creating_changing_exporting_and_erasing_a_client_each_leave_a_dated_line_naming_who_and_which_record()
     {
         using var app = new ClinicApp("audit", settings: Accounts.SignInOn);

@@ -44,6 +44,7 @@ public sealed class CreateAdminCommandTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Run_again_for_the_same_name_it_refuses_and_leaves_the_account_as_it_was()
     {
         using var data = new TempFolder("create-admin-twice");
@@ -90,6 +91,7 @@ public sealed class CreateAdminCommandTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_user_name_the_rules_refuse_creates_nothing_and_says_what_to_type()
     {
         using var app = new ClinicApp("create-admin-name", loadDemo: false);

@@ -13,6 +13,7 @@ namespace LowVisionAid.Reliability.Tests;
 public sealed class EfCoreWarningTests
 {
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_start_from_an_empty_folder_and_the_plan_visit_and_client_pages_log_no_EF_Core_warning()
     {
         using var app = new ClinicApp("ef-warnings", loadDemo: true) { UseTemplateDatabase = false };

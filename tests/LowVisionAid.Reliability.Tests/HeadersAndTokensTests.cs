@@ -7,6 +7,7 @@ namespace LowVisionAid.Reliability.Tests;
 public sealed class HeadersAndTokensTests
 {
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Every_page_sends_a_strict_content_security_policy_and_the_other_security_headers()
     {
         using var app = new ClinicApp("headers");
@@ -34,6 +35,7 @@ public sealed class HeadersAndTokensTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task No_page_has_inline_script_event_handlers_javascript_urls_or_inline_styles()
     {
         using var app = new ClinicApp("inline");
@@ -49,6 +51,7 @@ public sealed class HeadersAndTokensTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Every_form_posted_without_its_antiforgery_token_is_refused_with_400()
     {
         using var app = new ClinicApp("tokens");

@@ -32,6 +32,7 @@ public sealed partial class LogFileTests
     private static readonly TimeSpan StartLimit = TimeSpan.FromSeconds(120);
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_production_start_logs_a_handful_of_lines_without_sql_and_each_request_one_line_without_its_query()
     {
         using var data = new TempFolder("log-file");

@@ -29,6 +29,7 @@ public sealed class RestoreSchemaTests
 
     [Theory]
     [MemberData(nameof(Tampering))]
+    [Trait("Category", "Slow")]
     public async Task A_backup_with_a_schema_object_added_or_removed_is_refused_naming_it_and_nothing_changes(string tamper, string difference, string name)
     {
         // Arrange: a real backup of the running app, then one change to its schema
@@ -56,6 +57,7 @@ public sealed class RestoreSchemaTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task After_refusing_a_backup_with_a_deleting_trigger_a_new_client_leaves_every_other_client_in_place()
     {
         using var app = new ClinicApp("restore-trigger");
@@ -114,6 +116,7 @@ public sealed class RestoreSchemaTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_backup_from_an_older_version_is_restored_and_upgraded_but_the_same_with_an_extra_trigger_is_refused()
     {
         // Arrange: a database as the version before sign-in left it (its first two migrations), one clean, one with a trigger

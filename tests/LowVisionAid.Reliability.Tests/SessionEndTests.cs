@@ -58,6 +58,7 @@ public sealed class SessionEndTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_copied_sign_in_cookie_is_refused_after_an_administrator_disables_the_account()
     {
         using var app = new ClinicApp("session-disable", settings: Accounts.SignInOn);

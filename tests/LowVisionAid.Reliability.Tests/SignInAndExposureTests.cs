@@ -150,6 +150,7 @@ public sealed class SignInAndExposureTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Five_wrong_passwords_lock_the_account_so_even_the_right_one_is_refused()
     {
         using var app = new ClinicApp("lockout", settings: Accounts.SignInOn);
@@ -174,6 +175,7 @@ public sealed class SignInAndExposureTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_made_up_name_and_a_real_account_get_the_same_answer_before_and_after_lockout()
     {
         using var app = new ClinicApp("same-answer", settings: Accounts.SignInOn);
@@ -210,6 +212,7 @@ public sealed class SignInAndExposureTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_teacher_can_see_records_but_cannot_export_or_erase_and_a_clinician_can()
     {
         using var app = new ClinicApp("roles", settings: Accounts.SignInOn);

@@ -298,6 +298,7 @@ public class ClientHandoutRendererTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public void Wrapping_never_loses_or_reorders_a_word()
     {
         var word = Gen.String[Gen.Char['a', 'z'], 1, 12];

@@ -43,6 +43,7 @@ public class TradeOffFiguresTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public void Any_letter_count_from_the_engine_is_drawn_exactly()
     {
         var option = Gen.Select(Gen.Int[0, 400], Gen.Double[5, 300], Gen.Double[2, 60], (letters, fieldMm, power) =>

@@ -12,6 +12,7 @@ namespace LowVisionAid.Web.Tests.Infrastructure;
 public sealed class HandlerRegistrationTests
 {
     [Fact]
+    [Trait("Category", "Slow")]
     public void Every_use_case_handler_is_registered_once_and_the_authorization_handler_only_as_one()
     {
         IReadOnlyList<ServiceDescriptor> registered = [];

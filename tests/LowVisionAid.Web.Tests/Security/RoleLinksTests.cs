@@ -43,6 +43,7 @@ public sealed class RoleLinksTests
 
     [Theory]
     [MemberData(nameof(Roles))]
+    [Trait("Category", "Slow")]
     public async Task The_layout_shows_the_admin_section_only_to_administrators_and_names_who_is_signed_in(string role, bool _, bool administers)
     {
         using var app = new SignInApp();
@@ -62,6 +63,7 @@ public sealed class RoleLinksTests
 
     [Theory]
     [MemberData(nameof(Roles))]
+    [Trait("Category", "Slow")]
     public async Task A_role_without_the_right_is_refused_export_erasure_and_admin_pages_even_by_typed_address(string role, bool exports, bool administers)
     {
         using var app = new SignInApp();

@@ -40,6 +40,7 @@ public sealed partial class PlanReportPagesTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task The_handout_leaves_out_a_declined_device_names_the_trials_task_the_add_and_the_zoom_and_prints_at_her_critical_print_size()
     {
         using var app = new ClinicApp();

@@ -31,6 +31,7 @@ public sealed partial class PlanReportPagesTests
     private const string ClinicLine = "2 Quay Street, Port Example · 000 1111 2222 (invented) · desk@clinic.invalid";
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task The_handout_pdf_names_the_device_its_distances_every_caution_and_the_clinic_contact()
     {
         using var app = new ClinicApp();
@@ -59,6 +60,7 @@ public sealed partial class PlanReportPagesTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task The_handout_body_is_set_in_the_embedded_hyperlegible_face_at_the_clients_print_need()
     {
         using var app = new ClinicApp();
@@ -129,6 +131,7 @@ public sealed partial class PlanReportPagesTests
     [InlineData("Summary")]
     [InlineData("Print?for=client")]
     [InlineData("Print?for=clinician")]
+    [Trait("Category", "Slow")]
     public async Task A_plan_without_a_chosen_option_explains_that_on_screen_instead_of_giving_a_pdf(string page)
     {
         using var app = new ClinicApp();
@@ -159,6 +162,7 @@ public sealed partial class PlanReportPagesTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_handout_regenerated_from_the_stored_plan_has_identical_text()
     {
         using var app = new ClinicApp();
@@ -317,6 +321,7 @@ public sealed partial class PlanReportPagesTests
     [Theory]
     [InlineData("Handout")]
     [InlineData("Summary")]
+    [Trait("Category", "Slow")]
     public async Task A_second_pdf_reader_draws_every_page_on_a4_with_ink_inside_the_printable_area(string kind)
     {
         var pdftoppm = (Environment.GetEnvironmentVariable("PATH") ?? "").Split(Path.PathSeparator)

@@ -18,6 +18,7 @@ namespace LowVisionAid.Web.Tests.Pages.Settings;
 public sealed class CostClassSettingsTests
 {
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_cost_class_changed_on_the_settings_page_reorders_the_next_plan()
     {
         using var app = new ClinicApp();
@@ -65,6 +66,7 @@ public sealed class CostClassSettingsTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Saving_the_settings_unchanged_keeps_every_cost_class_at_the_cores_default()
     {
         using var app = new ClinicApp();

@@ -13,6 +13,7 @@ namespace LowVisionAid.Web.Tests.Pages.Site;
 public sealed partial class FormActionTests
 {
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Every_form_on_every_page_of_the_demo_clinic_renders_an_explicit_action()
     {
         using var app = new ClinicApp(loadDemo: true);
@@ -34,6 +35,7 @@ public sealed partial class FormActionTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task A_visit_form_keeps_its_client_and_a_trial_form_its_plan_in_the_action()
     {
         using var app = new ClinicApp(loadDemo: true);
