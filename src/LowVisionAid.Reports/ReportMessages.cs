@@ -31,4 +31,22 @@ public static class ReportMessages
     /// <summary>Every device the handout would describe was declined at its trial.</summary>
     public const string OnlyDeclinedDevices =
         "Every device chosen for this handout was declined at its trial, so there is nothing to give the client. Choose the device the client is taking home on the plan page, then print again.";
+
+    /// <summary>
+    /// What every report needs before it is drawn: at least one chosen device, each named, the client's code and the
+    /// clinic's name and phone. Null when all are there, else the message for the first one missing.
+    /// </summary>
+    public static string? MissingCommon(IEnumerable<string?>? chosenNames, string? clientCode, ClinicContact? clinic)
+    {
+        var names = chosenNames?.ToList();
+        if (names is null || names.Count == 0)
+            return NoChosenOption;
+        if (names.Exists(string.IsNullOrWhiteSpace))
+            return UnnamedDevice;
+        if (string.IsNullOrWhiteSpace(clientCode))
+            return NoClientCode;
+        if (clinic is null || string.IsNullOrWhiteSpace(clinic.Name) || string.IsNullOrWhiteSpace(clinic.Phone))
+            return NoClinicContact;
+        return null;
+    }
 }

@@ -261,14 +261,8 @@ public sealed class ClientHandoutRenderer(IFormatProvider? formatProvider = null
 
     private static string? Validate(ClientHandout model)
     {
-        if (model.Devices is null || model.Devices.Count == 0)
-            return ReportMessages.NoChosenOption;
-        if (model.Devices.Any(d => d is null || string.IsNullOrWhiteSpace(d.Name)))
-            return ReportMessages.UnnamedDevice;
-        if (string.IsNullOrWhiteSpace(model.ClientCode))
-            return ReportMessages.NoClientCode;
-        if (model.Clinic is null || string.IsNullOrWhiteSpace(model.Clinic.Name) || string.IsNullOrWhiteSpace(model.Clinic.Phone))
-            return ReportMessages.NoClinicContact;
+        if (ReportMessages.MissingCommon(model.Devices?.Select(d => d?.Name), model.ClientCode, model.Clinic) is { } missing)
+            return missing;
         if (!(model.BodyPoints >= ClientHandout.DefaultBodyPoints && model.BodyPoints <= ClientHandout.MaximumBodyPoints))
             return ReportMessages.BodySizeOutOfRange;
         if (!(model.TargetPrint.M >= ClientHandout.MinimumTargetM && model.TargetPrint.M <= ClientHandout.MaximumTargetM))

@@ -206,14 +206,8 @@ public sealed class ClinicianSummaryRenderer(IFormatProvider? formatProvider = n
 
     private static string? Validate(ClinicianSummary model)
     {
-        if (model.ChosenOptions is null || model.ChosenOptions.Count == 0)
-            return ReportMessages.NoChosenOption;
-        if (model.ChosenOptions.Any(o => o is null || string.IsNullOrWhiteSpace(o.Name)))
-            return ReportMessages.UnnamedDevice;
-        if (string.IsNullOrWhiteSpace(model.ClientCode))
-            return ReportMessages.NoClientCode;
-        if (model.Clinic is null || string.IsNullOrWhiteSpace(model.Clinic.Name) || string.IsNullOrWhiteSpace(model.Clinic.Phone))
-            return ReportMessages.NoClinicContact;
+        if (ReportMessages.MissingCommon(model.ChosenOptions?.Select(o => o?.Name), model.ClientCode, model.Clinic) is { } missing)
+            return missing;
         if (string.IsNullOrWhiteSpace(model.MethodVersion))
             return ReportMessages.NoMethodVersion;
         return null;
