@@ -15,8 +15,9 @@ public sealed class PlanPageBodyViewComponent(PlanDetailsHandler handler, Infras
 {
     public async Task<IViewComponentResult> InvokeAsync(int id)
     {
+        // Not cancelled with this request: the cache tag shares one render among the requests that wait for the key.
         // A plan removed between the page's stamp and this load: nothing to show (the next stamp is a 404).
-        var plan = await handler.HandleAsync(id, HttpContext.RequestAborted).ConfigureAwait(false);
+        var plan = await handler.HandleAsync(id, CancellationToken.None).ConfigureAwait(false);
         return plan is null
             ? Content("")
             : View("~/Pages/Plans/_PlanBody.cshtml", new PlanBody(plan, calendar.DateAndTime(plan.Created.UtcDateTime)));
