@@ -16,7 +16,32 @@ public enum PlanOptionList
 /// One option of a stored plan, named by where it sits in the plan's outputs: the goal, the list and its place in
 /// that list (all from 0). The outputs never change after the plan is made, so the place always names the same option.
 /// </summary>
-public readonly record struct PlanOptionRef(int Goal, PlanOptionList List, int Index);
+public readonly record struct PlanOptionRef(int Goal, PlanOptionList List, int Index)
+{
+    /// <summary>The option as text, such as <c>0:KitDevices:1</c>: its stored form, and the value of its choice button.</summary>
+    public string Key => string.Create(CultureInfo.InvariantCulture, $"{Goal}:{List}:{Index}");
+
+    /// <summary>
+    /// Reads <see cref="Key"/>'s form; false for anything else (a missing or negative number, a list that is not
+    /// named exactly, extra parts).
+    /// </summary>
+    public static bool TryParse(string? text, out PlanOptionRef option)
+    {
+        option = default;
+        var bits = (text ?? "").Trim().Split(':');
+        if (bits.Length == 3
+            && int.TryParse(bits[0], NumberStyles.None, CultureInfo.InvariantCulture, out var goal)
+            && Enum.TryParse<PlanOptionList>(bits[1], ignoreCase: false, out var list) && Enum.IsDefined(list)
+            && string.Equals(list.ToString(), bits[1], StringComparison.Ordinal)
+            && int.TryParse(bits[2], NumberStyles.None, CultureInfo.InvariantCulture, out var index))
+        {
+            option = new PlanOptionRef(goal, list, index);
+            return true;
+        }
+
+        return false;
+    }
+}
 
 /// <summary>
 /// The options the clinician chose for the handout, at most one for each goal. Immutable. Kept apart from the
@@ -29,7 +54,7 @@ public sealed class PlanChoices : IEquatable<PlanChoices>
     private PlanChoices(IEnumerable<PlanOptionRef> options)
     {
         _options = [.. options.OrderBy(o => o.Goal)];
-        Stored = string.Join(';', _options.Select(o => string.Create(CultureInfo.InvariantCulture, $"{o.Goal}:{o.List}:{o.Index}")));
+        Stored = string.Join(';', _options.Select(o => o.Key));
     }
 
     /// <summary>Nothing chosen.</summary>
@@ -66,14 +91,9 @@ public sealed class PlanChoices : IEquatable<PlanChoices>
         var options = new List<PlanOptionRef>();
         foreach (var part in (stored ?? "").Split(';', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
         {
-            var bits = part.Split(':');
-            if (bits.Length == 3
-                && int.TryParse(bits[0], NumberStyles.None, CultureInfo.InvariantCulture, out var goal)
-                && Enum.TryParse<PlanOptionList>(bits[1], ignoreCase: false, out var list) && Enum.IsDefined(list)
-                && int.TryParse(bits[2], NumberStyles.None, CultureInfo.InvariantCulture, out var index)
-                && !options.Exists(o => o.Goal == goal))
+            if (PlanOptionRef.TryParse(part, out var option) && !options.Exists(o => o.Goal == option.Goal))
             {
-                options.Add(new PlanOptionRef(goal, list, index));
+                options.Add(option);
             }
         }
 

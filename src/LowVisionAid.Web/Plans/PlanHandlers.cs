@@ -1,3 +1,4 @@
+using System.Globalization;
 using LowVisionAid.Data;
 using LowVisionAid.Data.Entities;
 using LowVisionAid.Web.Handouts;
@@ -159,6 +160,26 @@ public sealed class ChoosePlanOptionHandler(ClinicDbContext db, TimeProvider clo
 
 public sealed record PlanTrialRow(int Id, DateOnly Date, string Device, string Outcome, string FollowUp, string? Result, string? Comment);
 
+/// <summary>
+/// What the plan page needs before its cached body: the plan's client for the heading, and <see cref="Key"/>, which
+/// names the page body's content. The key is made of the plan's id, when it was made, its choices and when they
+/// changed, and the version token of its visit, its client, the settings, each trial and each trial's kit device
+/// (every save of those gives a new token, <c>ClinicDbContext.StampVersions</c>): nothing else the body shows can
+/// change (the outputs never change; the clinic's time zone is fixed for the process). A key from the records
+/// themselves, not a count of changes kept in memory, so a restored older database or a second app process on the
+/// same server database never gets a body made for other records.
+/// </summary>
+public sealed record PlanPageStamp(int PlanId, int ClientId, string ClientCode, string Key)
+{
+    /// <summary>The key of these parts: the plan id, then a SHA-256 of them all (short, whatever the trial count).</summary>
+    public static string KeyOf(IReadOnlyList<string> parts)
+    {
+        ArgumentNullException.ThrowIfNull(parts);
+        var hash = System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(string.Join('\n', parts)));
+        return $"plan-{parts[0]}-{Convert.ToHexString(hash)}";
+    }
+}
+
 public sealed record PlanView(
     int Id, int VisitId, DateOnly VisitDate, int ClientId, string ClientCode, bool IsDemo, DateTimeOffset Created,
     TypedPlan Outputs, IReadOnlyList<PlanTrialRow> Trials, PlanChoices Choices, PlanReportData Report);
@@ -167,8 +188,55 @@ public sealed record PlanView(
 /// The plan page's data from one load (the plan with its visit, client and trials, and the settings) and one read of
 /// its stored outputs: the typed plan for the page, and the report data for its handouts section.
 /// </summary>
-public sealed class PlanDetailsHandler(StoredPlanReader reader, ClinicCalendar calendar)
+public sealed class PlanDetailsHandler(ClinicDbContext db, StoredPlanReader reader, ClinicCalendar calendar)
 {
+    /// <summary>
+    /// The plan page's stamp: one query (no stored outputs read) for whether the plan exists, its client for the
+    /// page's heading, and every record whose change can change the page; null when there is no such plan.
+    /// </summary>
+    public async Task<PlanPageStamp?> StampAsync(int id, CancellationToken ct)
+    {
+        // One row per trial of the plan (one with no trial when there is none), each carrying the plan's own
+        // columns and the settings row's version; the outputs and inputs JSON are never selected.
+        var rows = await (
+            from p in db.Plans.AsNoTracking()
+            where p.Id == id
+            join t in db.Trials.AsNoTracking() on p.Id equals t.PlanId into trials
+            from t in trials.DefaultIfEmpty()
+            select new
+            {
+                p.CreatedUtc,
+                p.ChosenUtc,
+                p.Choices,
+                p.Visit!.ClientId,
+                p.Visit.Client!.Code,
+                VisitVersion = p.Visit.Version,
+                ClientVersion = p.Visit.Client.Version,
+                SettingsVersion = db.Settings.OrderBy(s => s.Id).Select(s => (Guid?)s.Version).FirstOrDefault(),
+                TrialId = (int?)t!.Id,
+                TrialVersion = (Guid?)t.Version,
+                KitVersion = (Guid?)t.KitDevice!.Version,
+            }).ToListAsync(ct).ConfigureAwait(false);
+        if (rows.Count == 0)
+        {
+            return null;
+        }
+
+        var plan = rows[0];
+        return new PlanPageStamp(id, plan.ClientId, plan.Code, PlanPageStamp.KeyOf(
+        [
+            id.ToString(CultureInfo.InvariantCulture),
+            plan.CreatedUtc.Ticks.ToString(CultureInfo.InvariantCulture),
+            plan.ChosenUtc?.Ticks.ToString(CultureInfo.InvariantCulture) ?? "",
+            plan.Choices.Stored,
+            plan.VisitVersion.ToString(),
+            plan.ClientVersion.ToString(),
+            plan.SettingsVersion?.ToString() ?? "",
+            .. rows.Where(r => r.TrialId is not null).OrderBy(r => r.TrialId)
+                .Select(r => string.Create(CultureInfo.InvariantCulture, $"{r.TrialId}/{r.TrialVersion}/{r.KitVersion}")),
+        ]));
+    }
+
     public async Task<PlanView?> HandleAsync(int id, CancellationToken ct)
     {
         if (await reader.LoadAsync(id, ct).ConfigureAwait(false) is not var (plan, settings))

@@ -118,9 +118,7 @@ public sealed class PlanChoiceTests
 
         var response = await browser.PostFormAsync($"/Plans/{planId}?handler=Choose", html, new Dictionary<string, string>
         {
-            ["goal"] = "0",
-            ["list"] = "KitDevices",
-            ["index"] = "99",
+            ["option"] = new PlanOptionRef(0, PlanOptionList.KitDevices, 99).Key,
         });
 
         Assert.Equal(HttpStatusCode.Redirect, response.StatusCode);
@@ -136,7 +134,7 @@ public sealed class PlanChoiceTests
         using var app = new ClinicApp();
         using var browser = app.Browser();
         var planId = await MadePlanAsync(app, browser, "C-6");
-        using var form = new FormUrlEncodedContent(new Dictionary<string, string> { ["goal"] = "0", ["list"] = "KitDevices", ["index"] = "0" });
+        using var form = new FormUrlEncodedContent(new Dictionary<string, string> { ["option"] = new PlanOptionRef(0, PlanOptionList.KitDevices, 0).Key });
 
         var response = await browser.PostAsync(new Uri($"/Plans/{planId}?handler=Choose", UriKind.Relative), form);
 

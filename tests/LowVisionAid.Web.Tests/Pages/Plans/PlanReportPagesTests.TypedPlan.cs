@@ -96,9 +96,7 @@ public sealed partial class PlanReportPagesTests
         var card = Cards().Matches(html).Select(m => m.Value).FirstOrDefault(c =>
             c.Contains($"id=\"goal-{goal}-", StringComparison.Ordinal) && WebUtility.HtmlDecode(c).Contains(heading, StringComparison.Ordinal));
         Assert.True(card is not null, $"no option card for {heading} in goal {goal}");
-        var action = FormAction().Match(card!);
-        Assert.True(action.Success, "the card's choice form");
-        return await browser.PostFormAsync(WebUtility.HtmlDecode(action.Groups[1].Value), card!, new Dictionary<string, string>());
+        return await PressCardAsync(browser, html, card!);
     }
 
     // Records a trial of a class of device with the trial form, as the plan page's trial link fills it.

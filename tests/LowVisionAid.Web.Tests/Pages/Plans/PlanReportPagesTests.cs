@@ -449,17 +449,32 @@ public sealed partial class PlanReportPagesTests
 
     /// <summary>
     /// Presses the choice button (handler Choose or Clear) of the option card whose heading contains
-    /// <paramref name="heading"/>, posting that card's own form as the browser would.
+    /// <paramref name="heading"/>, as the browser would: the button names the page's one choice form, and posts that
+    /// form (its antiforgery token) to the button's own action with the button's option value.
     /// </summary>
     internal static async Task<HttpResponseMessage> PressAsync(HttpClient browser, int planId, string heading, string handler)
     {
         var html = await browser.GetStringAsync(new Uri($"/Plans/{planId}", UriKind.Relative));
         var card = Cards().Matches(html).Select(m => m.Value).FirstOrDefault(c => WebUtility.HtmlDecode(c).Contains(heading, StringComparison.Ordinal));
         Assert.True(card is not null, $"no option card for {heading}");
-        var action = FormAction().Match(card!);
-        Assert.True(action.Success, "the card's choice form");
-        Assert.Contains("handler=" + handler, WebUtility.HtmlDecode(action.Groups[1].Value), StringComparison.Ordinal);
-        return await browser.PostFormAsync(WebUtility.HtmlDecode(action.Groups[1].Value), card!, new Dictionary<string, string>());
+        return await PressCardAsync(browser, html, card!, handler);
+    }
+
+    /// <summary>Presses the choice button of one option card of a fetched plan page (see <see cref="PressAsync"/>).</summary>
+    internal static async Task<HttpResponseMessage> PressCardAsync(HttpClient browser, string pageHtml, string card, string? handler = null)
+    {
+        var button = ChoiceButton().Match(card);
+        Assert.True(button.Success, "the card's choice button");
+        string Attribute(string name) => WebUtility.HtmlDecode(Regex.Match(button.Value, $" {name}=\"([^\"]*)\"").Groups[1].Value);
+        var action = Attribute("formaction");
+        if (handler is not null)
+        {
+            Assert.Contains("handler=" + handler, action, StringComparison.Ordinal);
+        }
+
+        var form = Regex.Match(pageHtml, $"<form id=\"{Attribute("form")}\"[^>]*>(.*?)</form>", RegexOptions.Singleline);
+        Assert.True(form.Success, "the page's choice form named by the button");
+        return await browser.PostFormAsync(action, form.Value, new Dictionary<string, string> { [Attribute("name")] = Attribute("value") });
     }
 
     /// <summary>Records a trial with the trial form, as the plan page's trial link does.</summary>
@@ -533,8 +548,8 @@ public sealed partial class PlanReportPagesTests
     [GeneratedRegex("<details class=\"option\".*?</details>", RegexOptions.Singleline)]
     private static partial Regex Cards();
 
-    [GeneratedRegex("<form [^>]*action=\"([^\"]*)\"")]
-    private static partial Regex FormAction();
+    [GeneratedRegex("<button type=\"submit\" form=[^>]*>")]
+    private static partial Regex ChoiceButton();
 
     [GeneratedRegex("<text [^>]*font-size=\"([0-9.]+)\"[^>]*>" + "Can<")]
     private static partial Regex FontSize();
