@@ -51,6 +51,7 @@ public sealed class PlanChoiceTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task The_explicit_choice_wins_over_a_dispensed_trial_and_clearing_it_falls_back_to_the_trial()
     {
         using var app = new ClinicApp();
@@ -72,6 +73,7 @@ public sealed class PlanChoiceTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Choosing_another_option_for_the_same_goal_replaces_the_first_choice()
     {
         using var app = new ClinicApp();
@@ -91,6 +93,7 @@ public sealed class PlanChoiceTests
     }
 
     [Fact]
+    [Trait("Category", "Slow")]
     public async Task Clearing_the_only_choice_of_a_plan_without_trials_brings_back_the_explanation()
     {
         using var app = new ClinicApp();
