@@ -66,6 +66,21 @@ public sealed partial class FormActionTests
         Assert.True(missing.Count == 0, "Forms that post to the address as shown:\n" + string.Join('\n', missing));
     }
 
+    [Fact]
+    public void No_field_in_the_page_sources_is_bound_through_an_indexer()
+    {
+        // ASP.NET Core compiles an asp-for holding an indexer (Input.Goals[i].Task) again on every render, about a
+        // millisecond each; rows go through a partial drawn with FormRows.For instead (its asp-for is a plain member).
+        var pagesFolder = Path.Combine(RepositoryRoot(), "src", "LowVisionAid.Web", "Pages");
+        var files = Directory.GetFiles(pagesFolder, "*.cshtml", SearchOption.AllDirectories);
+
+        var bindings = files.SelectMany(f => AspFor().Matches(File.ReadAllText(f)).Select(m => (File: Path.GetRelativePath(pagesFolder, f), For: m.Groups[1].Value))).ToList();
+
+        Assert.True(bindings.Count >= 40, $"Only {bindings.Count} asp-for bindings found under {pagesFolder}.");
+        var indexed = bindings.Where(b => b.For.Contains('[', StringComparison.Ordinal)).Select(b => $"{b.File}: {b.For}").ToList();
+        Assert.True(indexed.Count == 0, "Fields bound through an indexer:\n" + string.Join('\n', indexed));
+    }
+
     /// <summary>
     /// Follows the site's own links from the seeds, visiting one address of each shape (digits stand for any id),
     /// and returns every HTML page that answered 200.
@@ -118,6 +133,9 @@ public sealed partial class FormActionTests
 
     [GeneratedRegex("<form(?=[\\s>])[^>]*>", RegexOptions.IgnoreCase)]
     private static partial Regex FormTag();
+
+    [GeneratedRegex("\\basp-for=\"([^\"]*)\"")]
+    private static partial Regex AspFor();
 
     [GeneratedRegex("\\baction=\"([^\"]*)\"")]
     private static partial Regex ActionAttribute();

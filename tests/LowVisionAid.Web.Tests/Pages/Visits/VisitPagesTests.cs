@@ -2,6 +2,7 @@ using System.Net;
 using System.Text.Encodings.Web;
 using LowVisionAid.Optics.Notation;
 using LowVisionAid.Web.Pages.Visits;
+using LowVisionAid.TestSupport;
 using LowVisionAid.Web.Tests.Support;
 using Microsoft.EntityFrameworkCore;
 
@@ -83,6 +84,47 @@ public class VisitPagesTests
         Assert.Contains("value=\"6//60\"", html, StringComparison.Ordinal);
         Assert.Contains("<a href=\"#Input_Goals_1__TargetPrint\">", html, StringComparison.Ordinal);
         Assert.Equal(0, await app.WithDbAsync(db => db.Visits.CountAsync()));
+    }
+
+    [Fact]
+    public async Task Each_goal_and_reading_speed_row_posts_under_its_own_index_with_its_numbered_label_and_its_error_beside_it()
+    {
+        using var app = new ClinicApp();
+        var clientId = await app.ClientAsync("V-8");
+        using var browser = app.Browser();
+        var form = Records.VisitForm();
+        form["Input.Goals[1].Task"] = "Phone";   // a second goal without its print size
+
+        var response = await browser.SubmitAsync($"/Visits/New?clientId={clientId}", form);
+
+        var page = PageHtml.Parse(await response.Content.ReadAsStringAsync());
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        string? Label(string id) => page.QuerySelector($"label[for='{id}']")?.TextContent;
+        for (var g = 0; g < VisitInput.GoalRows; g++)
+        {
+            foreach (var (field, label) in new[] { ("Task", "task"), ("Detail", "in the client's words (optional)"), ("TargetPrint", "target print size"), ("ViewingDistance", "viewing distance (distance tasks)") })
+            {
+                var id = $"Input_Goals_{g}__{field}";
+                Assert.Equal($"Input.Goals[{g}].{field}", page.GetElementById(id)?.GetAttribute("name"));
+                Assert.Equal($"Goal {g + 1}: {label}", Label(id));
+            }
+        }
+
+        for (var r = 0; r < VisitInput.ReadingSpeedRows; r++)
+        {
+            Assert.Equal($"Input.ReadingSpeeds[{r}].PrintSize", page.GetElementById($"Input_ReadingSpeeds_{r}__PrintSize")?.GetAttribute("name"));
+            Assert.Equal($"Line {r + 1}: words per minute", Label($"Input_ReadingSpeeds_{r}__WordsPerMinute"));
+        }
+
+        // What was typed comes back in its own row, and the second goal's error sits beside its print size.
+        Assert.Equal("1M", page.GetElementById("Input_Goals_0__TargetPrint")?.GetAttribute("value"));
+        Assert.Equal("Phone", page.QuerySelector("#Input_Goals_1__Task option[selected]")?.GetAttribute("value"));
+        Assert.Equal("8M", page.GetElementById("Input_ReadingSpeeds_0__PrintSize")?.GetAttribute("value"));
+        var missing = page.GetElementById("Input_Goals_1__TargetPrint")!;
+        Assert.Equal("true", missing.GetAttribute("aria-invalid"));
+        Assert.Contains("Input_Goals_1__TargetPrint-error", missing.GetAttribute("aria-describedby") ?? "", StringComparison.Ordinal);
+        Assert.NotEmpty(page.GetElementById("Input_Goals_1__TargetPrint-error")?.TextContent ?? "");
+        Assert.Null(page.GetElementById("Input_Goals_0__TargetPrint")?.GetAttribute("aria-invalid"));
     }
 
     [Fact]
