@@ -20,6 +20,16 @@ public sealed class CapturedLogs : ILoggerProvider
 
     public IReadOnlyCollection<string> Lines => Collector.GetSnapshot().Select(Line).ToList();
 
+    /// <summary>The lines logged at Error or Critical.</summary>
+    public IReadOnlyList<string> ErrorLines => Collector.GetSnapshot().Where(r => r.Level >= LogLevel.Error).Select(Line).ToList();
+
+    /// <summary>Fails the test if any line was logged at Error or Critical, quoting the first.</summary>
+    public void AssertNoError()
+    {
+        var errors = ErrorLines;
+        Xunit.Assert.True(errors.Count == 0, $"{errors.Count} error lines, e.g. {(errors.Count == 0 ? null : errors[0])}");
+    }
+
     public ILogger CreateLogger(string categoryName) => _provider.CreateLogger(categoryName);
 
     public void Dispose() => _provider.Dispose();
