@@ -202,8 +202,12 @@ public sealed class CrashHarnessTests(ITestOutputHelper output)
     }
 }
 
-/// <summary>Tests that start the app as a real process run one at a time, to spare the two cores.</summary>
-[CollectionDefinition(Name, DisableParallelization = true)]
+/// <summary>
+/// Tests that start the app as a real process run one at a time, in one collection: beside at most one in-process
+/// class, not alone at the end of the run with a core idle (they hold the most Slow tests, so SlowClassesFirst
+/// starts them first).
+/// </summary>
+[CollectionDefinition(Name)]
 public sealed class RealProcessTests
 {
     public const string Name = "Real app process";
