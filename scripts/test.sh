@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Runs every test project from a fresh clone: installs what is missing (scripts/bootstrap.sh), restores, builds with
-# warnings as errors, runs the tests on SQLite, then runs the database suites (Web, Reliability) again against a
+# warnings as errors, runs the tests on SQLite (the browser suite beside the others), then runs the database suites (Web, Reliability) again against a
 # throwaway PostgreSQL server on loopback (scripts/test-server.sh; if it cannot start, that counts as a failure), and
 # ends with one line "N passed, N failed[, N skipped]" (scripts/count-results.sh, which counts a crashed or aborted run
 # as failed). Exits non-zero on any failure or if no test ran.
@@ -17,14 +17,26 @@ bash scripts/bootstrap.sh
 dotnet restore LowVisionAid.sln
 dotnet build LowVisionAid.sln --no-restore -c Release -warnaserror
 
-for project in tests/*/*.Tests.csproj; do
+# One project's tests on SQLite: its TRX and its exit code (for count-results.sh) in the results folder.
+run_project() {
+  local project=$1 name code=0
   name=$(basename "$project" .csproj)
   echo "== $name"
-  code=0
   dotnet test "$project" --no-build -c Release --filter "Category!=ServerOnly" \
     --logger "trx;LogFileName=$name.trx" --results-directory "$results" || code=$?
   echo "$code" > "$results/$name.exit"
+}
+
+# The browser suite runs its tests one at a time and keeps the two cores about 70 % busy (chromium waits on the app
+# and the app on chromium), so it runs beside the other projects, its output kept apart and printed when it ends.
+browser=tests/LowVisionAid.Browser.Tests/LowVisionAid.Browser.Tests.csproj
+run_project "$browser" > "$results/browser-lane.log" 2>&1 &
+browser_lane=$!
+for project in tests/*/*.Tests.csproj; do
+  [ "$project" = "$browser" ] || run_project "$project"
 done
+wait "$browser_lane" || true
+cat "$results/browser-lane.log"
 
 # The same app on a shared PostgreSQL server: the database suites again, without the tests about the SQLite file itself.
 server=$(mktemp -d "${TMPDIR:-/tmp}/lva-test-server.XXXXXX")
