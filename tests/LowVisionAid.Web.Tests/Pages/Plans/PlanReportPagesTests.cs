@@ -6,6 +6,7 @@ using LowVisionAid.Data.Entities;
 using LowVisionAid.Reports;
 using LowVisionAid.Reports.Fonts;
 using LowVisionAid.Reports.Handouts;
+using LowVisionAid.TestSupport;
 using LowVisionAid.Web.Handouts;
 using LowVisionAid.Web.Plans;
 using LowVisionAid.Web.Tests.Support;
@@ -502,7 +503,8 @@ public sealed partial class PlanReportPagesTests
             dir = dir.Parent;
         }
 
-        var path = Path.Combine(dir?.FullName ?? Path.GetTempPath(), "test-artifacts", "handouts");
+        // One folder per database: the SQLite and server runs of this suite may overlap (scripts/test.sh's two lanes).
+        var path = Path.Combine(dir?.FullName ?? Path.GetTempPath(), "test-artifacts", "handouts", TestServer.Provider.ToString().ToLowerInvariant());
         Directory.CreateDirectory(path);
         return path;
     }
