@@ -4,6 +4,7 @@ using CsCheck;
 using LowVisionAid.Optics.Notation;
 using LowVisionAid.Optics.Text;
 using LowVisionAid.Reliability.Tests.Support;
+using LowVisionAid.TestSupport;
 using Microsoft.Extensions.Logging;
 using Xunit.Abstractions;
 
@@ -24,6 +25,7 @@ public sealed class BadInputTests(ITestOutputHelper output)
     public static TheoryData<string> Parsers() => ["distance acuity", "near acuity", "print size", "distance", "non-chart vision", "power", "contrast sensitivity", "near acuity from two fields"];
 
     [Trait("Category", "Slow")]
+    [Trait("Category", TestServer.NoDatabaseCategory)]
     [Theory]
     [MemberData(nameof(Parsers))]
     public void A_parser_given_ten_thousand_hostile_inputs_never_throws_and_every_refusal_says_what_to_type(string parser)

@@ -5,6 +5,7 @@ using System.Text.Json;
 using System.Text.RegularExpressions;
 using CsCheck;
 using LowVisionAid.Reliability.Tests.Support;
+using LowVisionAid.TestSupport;
 using Microsoft.Extensions.Logging;
 using Xunit.Abstractions;
 
@@ -16,6 +17,8 @@ namespace LowVisionAid.Reliability.Tests;
 /// fields, wrong JSON types and malformed JSON. No answer is a server error, nothing escapes as an exception (no error
 /// in the log), an answer is JSON, and every refusal is a ProblemDetails whose message says what to type.
 /// </summary>
+// The calculation API holds no state: its handler reads neither the database nor the clinic's settings.
+[Trait("Category", TestServer.NoDatabaseCategory)]
 public sealed partial class CalculationApiBadInputTests(ITestOutputHelper output)
 {
     /// <summary>CsCheck's iteration count: CsCheck_Iter, which scripts/test.sh sets to 10,000; CsCheck's default (100) otherwise.</summary>

@@ -27,6 +27,12 @@ public static class TestServer
     /// </summary>
     public const string ServerOnlyCategory = "ServerOnly";
 
+    /// <summary>
+    /// Tests whose subject never reads or writes the database (the calculation API, the parsers): not run again in the
+    /// server pass, where they would check the same code on a second database they do not touch.
+    /// </summary>
+    public const string NoDatabaseCategory = "NoDatabase";
+
     private static readonly Lazy<Task<string>> Template = new(BuildTemplateAsync, LazyThreadSafetyMode.ExecutionAndPublication);
     private static readonly SemaphoreSlim Creating = new(1, 1);
 
