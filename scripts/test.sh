@@ -15,6 +15,19 @@ rm -rf "$results"
 mkdir -p "$results"
 
 bash scripts/bootstrap.sh
+
+# The throwaway PostgreSQL server on loopback for the second run of the database suites (Web, Reliability), started
+# before the build, whose two cores are not all busy.
+server=$(mktemp -d "${TMPDIR:-/tmp}/lva-test-server.XXXXXX")
+trap 'bash scripts/test-server.sh stop "$server"' EXIT
+server_connection=
+if bash scripts/test-server.sh start "$server"; then
+  server_connection=$(cat "$server/connection")
+else
+  echo "The PostgreSQL test server did not start: the server run counts as failed."
+  echo 1 > "$results/PostgreSqlServer.exit"
+fi
+
 dotnet restore LowVisionAid.sln
 dotnet build LowVisionAid.sln --no-restore -c Release -warnaserror
 
@@ -38,17 +51,6 @@ run_on_server() {
   CsCheck_Iter=$(( CsCheck_Iter / 10 > 100 ? CsCheck_Iter / 10 : 100 )) LVA_TEST_POSTGRES=$server_connection \
     run_tests "$1" "$(basename "$1" .csproj).PostgreSql" "Category!=SqliteFile&Category!=NoDatabase"
 }
-
-# The throwaway PostgreSQL server on loopback for the second run of the database suites (Web, Reliability).
-server=$(mktemp -d "${TMPDIR:-/tmp}/lva-test-server.XXXXXX")
-trap 'bash scripts/test-server.sh stop "$server"' EXIT
-server_connection=
-if bash scripts/test-server.sh start "$server"; then
-  server_connection=$(cat "$server/connection")
-else
-  echo "The PostgreSQL test server did not start: the server run counts as failed."
-  echo 1 > "$results/PostgreSqlServer.exit"
-fi
 
 # Two lanes, one a core. The browser suite runs its tests one at a time and keeps the two cores about 70 % busy
 # (chromium waits on the app and the app on chromium), so it runs beside the other projects, then the web suite's
