@@ -65,7 +65,13 @@ for project in tests/*/*.Tests.csproj; do
   [ "$project" = "$browser" ] || run_on_sqlite "$project"
 done
 run_on_server "$reliability"
-wait "$browser_lane" || true
+lane_code=0
+wait "$browser_lane" || lane_code=$?
 cat "$results/browser-lane.log"
+if [ "$lane_code" -ne 0 ]; then
+  # Each project writes its own exit code; a lane cut short may not have, so the lane's own failure is counted too.
+  echo "The browser lane ended with exit code $lane_code: counted as failed."
+  echo "$lane_code" > "$results/BrowserLane.exit"
+fi
 
 bash scripts/count-results.sh "$results"
