@@ -201,7 +201,6 @@ public sealed class BadInputTests(ITestOutputHelper output)
         Regex.Replace(Regex.Replace(html, "<(script|style)[^>]*>.*?</\\1>|<[^>]+>", " ",
             RegexOptions.Singleline), @"\s+", " ").Trim();
 
-
     private static string Printable(string text, int length = 80) =>
         string.Concat(text.Take(length).Select(c => char.IsControl(c) || char.IsSurrogate(c) || c > 0x7E ? $"\\u{(int)c:X4}" : c.ToString()));
 }

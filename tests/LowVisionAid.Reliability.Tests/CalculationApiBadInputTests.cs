@@ -272,7 +272,6 @@ public sealed partial class CalculationApiBadInputTests(ITestOutputHelper output
         }
     }
 
-
     private static string Printable(string text) =>
         string.Concat(text.Take(300).Select(c => char.IsControl(c) || char.IsSurrogate(c) || c > 0x7E ? $"\\u{(int)c:X4}" : c.ToString()));
 }

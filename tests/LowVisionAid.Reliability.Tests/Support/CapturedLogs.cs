@@ -27,7 +27,7 @@ public sealed class CapturedLogs : ILoggerProvider
     public void AssertNoError()
     {
         var errors = ErrorLines;
-        Xunit.Assert.True(errors.Count == 0, $"{errors.Count} error lines, e.g. {(errors.Count == 0 ? null : errors[0])}");
+        Assert.True(errors.Count == 0, $"{errors.Count} error lines, e.g. {(errors.Count == 0 ? null : errors[0])}");
     }
 
     public ILogger CreateLogger(string categoryName) => _provider.CreateLogger(categoryName);
