@@ -138,8 +138,8 @@ public class ClinicHost : WebApplicationFactory<Program>
 
         if (LogCollector is not null)
         {
-            // The capture sees every line from LogCaptureLevel up (Debug unless set, below appsettings.json's levels;
-            // the privacy pin on the framework's request lines still holds); the console stays quiet so the runs stay fast.
+            // The capture sees every line from LogCaptureLevel up (Debug unless set), whatever appsettings.json's levels
+            // say (the privacy pin on the framework's request lines still holds); the console stays quiet so the runs stay fast.
             foreach (var category in new[] { "Default", "LowVisionAid", "Microsoft.AspNetCore", "Microsoft.EntityFrameworkCore" })
             {
                 builder.UseSetting("Logging:LogLevel:" + category, LogCaptureLevel.ToString());

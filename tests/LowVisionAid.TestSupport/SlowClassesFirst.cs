@@ -44,7 +44,7 @@ public sealed class SlowClassesFirst : ITestCollectionOrderer
                 .Count(m => m.IsDefined(typeof(FactAttribute), inherit: true) && (classIsSlow || IsSlow(m)));
             if (slowTests > 0)
             {
-                var name = type.IsDefined(typeof(CollectionAttribute)) ? CollectionName(type) : DefaultCollectionPrefix + type.FullName;
+                var name = CollectionOf(type);
                 counts[name] = counts.GetValueOrDefault(name) + slowTests;
             }
         }
@@ -56,7 +56,12 @@ public sealed class SlowClassesFirst : ITestCollectionOrderer
         member.GetCustomAttributesData().Any(a => a.AttributeType == typeof(TraitAttribute)
             && a.ConstructorArguments is [{ Value: "Category" }, { Value: SlowCategory }]);
 
-    // A [Collection("name")] class belongs to the collection of that name.
-    private static string CollectionName(Type type) =>
-        type.GetCustomAttributesData().First(a => a.AttributeType == typeof(CollectionAttribute)).ConstructorArguments[0].Value as string ?? "";
+    /// <summary>The display name of the collection a test class runs in: its <c>[Collection("name")]</c>, else xunit's one-class collection.</summary>
+    public static string CollectionOf(Type type)
+    {
+        ArgumentNullException.ThrowIfNull(type);
+        return type.GetCustomAttributesData().FirstOrDefault(a => a.AttributeType == typeof(CollectionAttribute)) is { } named
+            ? named.ConstructorArguments[0].Value as string ?? ""
+            : DefaultCollectionPrefix + type.FullName;
+    }
 }
