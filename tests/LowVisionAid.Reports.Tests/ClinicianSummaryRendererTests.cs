@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Figures;
 using LowVisionAid.Reports.Summaries;
@@ -51,6 +52,25 @@ public class ClinicianSummaryRendererTests
         Assert.Equal("8.3 cm", Assert.Single(figures, f => f.Label == "Working distance").Value);
         Assert.Single(figures, f => f.Label == "Depth of focus");
         Assert.Single(figures, f => f.Label == "Equivalent power");
+    }
+
+    [Fact]
+    public void A_distance_telescope_s_field_is_labelled_at_the_viewing_distance_and_printed_once()
+    {
+        // Common practice: a distance telescope's field is measured at what is viewed, not on a page. The plan page's
+        // figures carry it under the same label, so the summary prints it once.
+        var model = SampleModels.Summary();
+        var option = model.ChosenOptions[0] with
+        {
+            Family = OptionKind.DistanceTelescope,
+            OtherFigures = [new OptionFigure("Field at the viewing distance", "35 cm")],
+        };
+
+        var figures = new SummaryText().Figures(option);
+
+        Assert.Equal("35 cm", Assert.Single(figures, f => f.Label == "Field at the viewing distance").Value);
+        Assert.DoesNotContain(figures, f => f.Label == "Field on the page");
+        Assert.Contains(new SummaryText().Figures(model.ChosenOptions[0]), f => f.Label == "Field on the page");
     }
 
     [Fact]

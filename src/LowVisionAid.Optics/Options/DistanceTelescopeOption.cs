@@ -115,7 +115,7 @@ public sealed record DistanceTelescopeOption : MagnifierOption
     /// <inheritdoc/>
     protected override string Describe(IFormatProvider provider) => string.Format(
         provider,
-        "{0} {1} telescope {2:0.#}× ({3:0.0} cm long){7}, field about {4:0.0}°: focus {5:+0.00} D nearer for {6:0.0#} m. Never use it while walking.",
+        "{0} {1} telescope {2:0.#}× ({3:0.0} cm long){7}, field about {4:0.0}°: focus it for {6:0.##} m ({5:+0.00} D from its far setting). Never use it while walking.",
         SpectacleMounted ? "Spectacle-mounted" : "Hand-held",
         Design == TelescopeDesign.Galilean ? "Galilean" : "Keplerian",
         Magnification,

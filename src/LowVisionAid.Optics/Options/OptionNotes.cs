@@ -100,4 +100,25 @@ public static class OptionNotes
 
     /// <summary>Stand magnifier labels.</summary>
     public const string StandLabelsUnreliable = "The \"×\" printed on a stand magnifier is unreliable: judge it by its power, image position and enlargement ratio, never by the \"×\" alone.";
+
+    /// <summary>The label of a near option's linear field.</summary>
+    public const string FieldOnPage = "Field on the page";
+
+    /// <summary>The label of a distance telescope's linear field, measured at the object.</summary>
+    public const string FieldAtViewingDistance = "Field at the viewing distance";
+
+    /// <summary>The label of a near option's focusing: the eye's own accommodation, or a reading add, beyond the distance correction.</summary>
+    public const string FocusingOrAdd = "Focusing or add needed";
+
+    /// <summary>
+    /// The label of a distance telescope's focusing: what the eye would need if the telescope stayed set for far,
+    /// supplied by turning its focus (or a cap) instead (methods §3.5).
+    /// </summary>
+    public const string FocusingFromFarSetting = "Focusing from its far setting";
+
+    /// <summary>The label of an option's linear field: on the page, or at the viewing distance for a distance telescope.</summary>
+    public static string FieldLabel(OptionKind kind) => Ranking.IsDistanceKind(kind) ? FieldAtViewingDistance : FieldOnPage;
+
+    /// <summary>The label of the focusing an option asks beyond the distance correction (<see cref="MagnifierOption.AccommodationOrAddNeeded"/>).</summary>
+    public static string FocusingLabel(OptionKind kind) => Ranking.IsDistanceKind(kind) ? FocusingFromFarSetting : FocusingOrAdd;
 }

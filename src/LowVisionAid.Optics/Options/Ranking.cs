@@ -74,7 +74,10 @@ public enum RankingRule
     /// <summary>The lower cost class first (<see cref="DeviceRanges.Costs"/>; clinic-editable; common practice).</summary>
     Cost = 13,
 
-    /// <summary>Finally, the eye-to-page distance nearest the preferred working distance (smallest ratio either way) comes first.</summary>
+    /// <summary>
+    /// Finally, the eye-to-page distance (for distance viewing, eye to what is viewed) nearest the preferred distance
+    /// (smallest ratio either way) comes first.
+    /// </summary>
     NearestWorkingDistance = 14,
 }
 
@@ -112,8 +115,8 @@ public readonly record struct RankingReason(RankingRule Rule, bool InFavour)
         (RankingRule.RoomyField, false) => "Fewer than 10 letters in view: long reading may be slow and tiring.",
         (RankingRule.Cost, true) => "Low cost.",
         (RankingRule.Cost, false) => "Costs more.",
-        (RankingRule.NearestWorkingDistance, true) => "Eye-to-page distance within 25 % of the preferred working distance.",
-        (RankingRule.NearestWorkingDistance, false) => "Eye-to-page distance far from the preferred working distance.",
+        (RankingRule.NearestWorkingDistance, true) => "Eye to page (or to what is viewed) within 25 % of the preferred distance.",
+        (RankingRule.NearestWorkingDistance, false) => "Eye to page (or to what is viewed) far from the preferred distance.",
         _ => Rule.ToString(),
     };
 }
@@ -285,7 +288,8 @@ public static class Ranking
         _ => 2,
     };
 
-    private static bool IsDistanceKind(OptionKind kind) => kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
+    /// <summary>True for the classes of device made for distance viewing (the two distance telescopes).</summary>
+    internal static bool IsDistanceKind(OptionKind kind) => kind is OptionKind.DistanceTelescope or OptionKind.SpectacleTelescope;
 
     private static bool SuitsTask(MagnifierOption o, ReadingTask task)
     {

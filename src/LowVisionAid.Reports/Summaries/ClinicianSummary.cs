@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Reports.Summaries;
@@ -97,13 +98,14 @@ public sealed record MethodEstimate(string Method, Power? EquivalentPower, strin
 /// <param name="Kind">The kind of device, e.g. "Hand magnifier".</param>
 /// <param name="EquivalentPower">Its equivalent power.</param>
 /// <param name="WorkingDistance">Lens-to-page (or eye-to-page) working distance.</param>
-/// <param name="Field">Linear field on the page, or null when not applicable.</param>
+/// <param name="Field">Linear field on the page (for a distance telescope, at the viewing distance), or null when not applicable.</param>
 /// <param name="LettersInView">Letters of the target print in the field, or null.</param>
 /// <param name="OtherFigures">Every other figure, already formatted.</param>
 /// <param name="Reasons">Why it was chosen.</param>
 /// <param name="Cautions">Cautions that apply to it.</param>
 /// <param name="WeighedReasons">Its reasons labelled for or against; printed instead of <paramref name="Reasons"/> when given.</param>
 /// <param name="Task">The task it was chosen for, or null.</param>
+/// <param name="Family">The class of device, which words its field (on the page, or at the viewing distance); null reads as a near device.</param>
 public sealed record ChosenOption(
     string Name,
     string Kind,
@@ -115,7 +117,8 @@ public sealed record ChosenOption(
     IReadOnlyList<string> Reasons,
     IReadOnlyList<string> Cautions,
     IReadOnlyList<OptionReason>? WeighedReasons = null,
-    string? Task = null);
+    string? Task = null,
+    OptionKind? Family = null);
 
 /// <summary>A figure of an option, already formatted, e.g. "Depth of field" and "5.6 mm".</summary>
 /// <param name="Label">What the figure is.</param>

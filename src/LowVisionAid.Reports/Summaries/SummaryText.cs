@@ -1,4 +1,5 @@
 using System.Globalization;
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Quantities;
 
 namespace LowVisionAid.Reports.Summaries;
@@ -136,7 +137,7 @@ public sealed class SummaryText(IFormatProvider? formatProvider = null)
             new("Working distance", Length(option.WorkingDistance)),
         };
         if (option.Field is { } field)
-            figures.Add(new("Field on the page", field.Abs().Millimetres.ToString("0", _culture) + " mm"));
+            figures.Add(new(option.Family is { } family ? OptionNotes.FieldLabel(family) : OptionNotes.FieldOnPage, field.Abs().Millimetres.ToString("0", _culture) + " mm"));
         if (option.LettersInView is { } letters)
             figures.Add(new("Letters in view", letters.ToString(_culture)));
         figures.RemoveAll(f => option.OtherFigures.Any(o => string.Equals(o.Label, f.Label, StringComparison.Ordinal)));

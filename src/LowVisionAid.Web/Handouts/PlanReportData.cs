@@ -49,7 +49,7 @@ public sealed record PlanReportData(
 /// <param name="EquivalentPower">Power given, as the plan stored it.</param>
 /// <param name="WorkingDistance">Working distance, as the plan stored it.</param>
 /// <param name="EyeToLens">Eye-to-lens distance, or null.</param>
-/// <param name="Field">Field on the page, or null.</param>
+/// <param name="Field">Field on the page (for a distance telescope, at the viewing distance), or null.</param>
 /// <param name="LettersInView">Letters of the target print in view, or null.</param>
 /// <param name="HasLightOrBattery">True for lit or electronic devices.</param>
 /// <param name="Figures">Every figure the plan stored for it, as shown on the plan page.</param>

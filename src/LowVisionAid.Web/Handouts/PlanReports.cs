@@ -72,7 +72,8 @@ public sealed class PlanReports(
             o.Reasons,
             o.Notes,
             o.WeighedReasons,
-            o.TrialTask ?? o.Task)).ToList();
+            o.TrialTask ?? o.Task,
+            o.Family)).ToList();
         return new ClinicianSummary(
             plan.Clinic,
             plan.ClientCode,

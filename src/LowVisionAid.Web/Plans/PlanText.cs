@@ -267,13 +267,13 @@ public static class PlanText
         Add(figures, "Label reads", o.Labels is { } l ? $"{l.Nominal.ToString("0.#", Invariant)}× nominal, {l.Trade.ToString("0.#", Invariant)}× trade (re 25 cm)" : null);
         figures.Add(new("Working distance", Length(o.WorkingDistance, imperial)));
         Add(figures, "Eye to lens", o.EyeToLens is { } eye ? Length(eye, imperial) : null);
-        Add(figures, "Field on the page", o.LinearField is { } field ? Length(field, imperial) : null);
+        Add(figures, OptionNotes.FieldLabel(o.Kind), o.LinearField is { } field ? Length(field, imperial) : null);
         Add(figures, "Letters in view", LettersInView(o));
         figures.Add(new("Depth of focus", DepthOfFocus(o, imperial)));
         figures.Add(new("Both eyes", o.Binocular.Feasible
             ? $"Possible (convergence demand {o.Binocular.ConvergenceDemand.ToString("0.#", Invariant)} Δ{(o.Binocular.BaseInPrismEachEye is { } bi ? $"; {bi.ToString("0.#", Invariant)} Δ base-in in each lens (add + 2 each eye), convergence left after the prism {o.Binocular.ResidualConvergence.ToString("0.#", Invariant)} Δ" : "")})"
             : "One eye only"));
-        figures.Add(new("Accommodation or add needed", Power(o.AccommodationOrAddNeeded)));
+        figures.Add(new(OptionNotes.FocusingLabel(o.Kind), Power(o.AccommodationOrAddNeeded)));
         figures.Add(new("Hands free", YesNo(o.HandsFree)));
         figures.Add(new("Suits a tremor", YesNo(o.SuitsTremor)));
         figures.Add(new("Light and contrast", o.LightAndContrast));

@@ -61,11 +61,30 @@ public class OptionRulesTests
         Assert.Equal(7, plan.NotConsidered.Length);
         Assert.Contains(Caution.Driving, plan.Cautions);
         Assert.Contains("walking", t.Summary(CultureInfo.InvariantCulture), StringComparison.Ordinal);
+        // The focusing is the telescope's to supply, turned for 3 m; the 13.53 D is what the eye would need with it left
+        // set for far (derived above), not an add.
+        Assert.Contains("focus it for 3 m (+13.53 D from its far setting)", t.Summary(CultureInfo.InvariantCulture), StringComparison.Ordinal);
+        Assert.Equal("Focusing from its far setting", OptionNotes.FocusingLabel(t.Kind));
+        Assert.Equal("Field at the viewing distance", OptionNotes.FieldLabel(t.Kind));
         // A hand-held telescope is one eye (methods §11); a spectacle-mounted one stops at 4×, short of the 5× needed.
         Assert.False(t.Binocular.Feasible);
         var mounted = plan.Options.Select(r => r.Option).OfType<DistanceTelescopeOption>().Single(o => o.SpectacleMounted);
         Assert.Equal(OptionKind.SpectacleTelescope, mounted.Kind);
         Assert.False(mounted.IsPractical);
+    }
+
+    [Theory]
+    [InlineData(OptionKind.DistanceTelescope, "Field at the viewing distance", "Focusing from its far setting")]
+    [InlineData(OptionKind.SpectacleTelescope, "Field at the viewing distance", "Focusing from its far setting")]
+    [InlineData(OptionKind.NearTelescope, "Field on the page", "Focusing or add needed")]
+    [InlineData(OptionKind.HandMagnifier, "Field on the page", "Focusing or add needed")]
+    [InlineData(OptionKind.VideoMagnifier, "Field on the page", "Focusing or add needed")]
+    public void A_distance_telescope_s_field_is_at_what_is_viewed_and_its_focusing_is_its_own(OptionKind kind, string field, string focusing)
+    {
+        // Common practice: a distance telescope's field is measured at the object (a television 3 m away), not on a page,
+        // and the focusing for a near object is turned on the telescope (methods §3.5), not worn as an add.
+        Assert.Equal(field, OptionNotes.FieldLabel(kind));
+        Assert.Equal(focusing, OptionNotes.FocusingLabel(kind));
     }
 
     [Fact]

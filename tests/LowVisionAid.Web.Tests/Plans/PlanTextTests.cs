@@ -41,4 +41,37 @@ public class PlanTextTests
 
         Assert.Contains(PlanText.Method(Optics.Requirement.PowerMethod.NearAcuity), view, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void A_saved_plan_words_a_distance_telescope_s_field_and_focusing_as_the_calculator_does()
+    {
+        // 6/60 to 6/12 at 3 m: a 6× Keplerian set for far asks the eye for +13.53 D (methods §3.5, derived in the optics
+        // tests). Its field is at what is viewed and its focusing its own (common practice); the calculator uses the same
+        // labels (OptionNotes, one home).
+        var plan = Planner.Build(new PlanRequest
+        {
+            TargetPrint = PrintSize.FromM(1),
+            PreferredDistance = Distance.FromMetres(3),
+            Task = ReadingTask.DistanceViewing,
+            DistanceAcuity = Acuity.FromSnellen(6, 60),
+            GoalDistanceAcuity = Acuity.FromSnellen(6, 12),
+        });
+        var telescope = plan.Options.Select(r => r.Option).OfType<DistanceTelescopeOption>().Single(o => !o.SpectacleMounted);
+
+        var figures = PlanText.Figures(telescope, imperial: false);
+
+        Assert.Equal("+13.53 D", Assert.Single(figures, f => f.Label == "Focusing from its far setting").Value);
+        Assert.Single(figures, f => f.Label == "Field at the viewing distance");
+        Assert.DoesNotContain(figures, f => f.Label is "Field on the page" or "Letters in view" or "Focusing or add needed");
+        var hand = Planner.Build(new PlanRequest
+        {
+            TargetPrint = PrintSize.FromM(1),
+            PreferredDistance = Distance.FromCentimetres(25),
+            Task = ReadingTask.SustainedReading,
+            RequiredPower = Power.FromDioptres(20),
+        }).Options.Select(r => r.Option).OfType<HandMagnifierOption>().Single();
+        var near = PlanText.Figures(hand, imperial: false).Select(f => f.Label).ToList();
+        Assert.Contains("Field on the page", near);
+        Assert.Contains("Focusing or add needed", near);
+    }
 }

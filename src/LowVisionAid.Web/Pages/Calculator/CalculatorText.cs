@@ -1,3 +1,4 @@
+using LowVisionAid.Optics.Options;
 using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Optics.Requirement;
@@ -132,6 +133,20 @@ public static class CalculatorText
         $"{percent.ToString("0", provider)} % (text about {(pixels ?? 0).ToString("0", provider)} px)";
 
     /// <summary>The power an option gives against the power needed.</summary>
+    /// <summary>The label of an option's field, as the plan page words it (<see cref="OptionNotes.FieldLabel"/>).</summary>
+    public static string FieldLabel(OptionView option)
+    {
+        ArgumentNullException.ThrowIfNull(option);
+        return OptionNotes.FieldLabel(Enum.Parse<OptionKind>(option.Kind));
+    }
+
+    /// <summary>The label of an option's focusing, as the plan page words it (<see cref="OptionNotes.FocusingLabel"/>).</summary>
+    public static string FocusingLabel(OptionView option)
+    {
+        ArgumentNullException.ThrowIfNull(option);
+        return OptionNotes.FocusingLabel(Enum.Parse<OptionKind>(option.Kind));
+    }
+
     public static string PowerGiven(OptionView option, IFormatProvider provider)
     {
         ArgumentNullException.ThrowIfNull(option);

@@ -1,5 +1,7 @@
 using System.Globalization;
 using LowVisionAid.Optics.Notation;
+using LowVisionAid.Optics.Options;
+using LowVisionAid.Optics.Planning;
 using LowVisionAid.Optics.Quantities;
 using LowVisionAid.Reports.Figures;
 using Microsoft.AspNetCore.Mvc;
@@ -20,6 +22,12 @@ public sealed class QuickCalculatorModel(QuickPlanHandler handler, TradeOffFigur
     public IReadOnlyList<TradeOffFigure> Figures { get; private set; } = [];
 
     public static CultureInfo Culture => CultureInfo.CurrentCulture;
+
+    /// <summary>
+    /// True for a distance-viewing plan (<see cref="Ranking.IsDistanceTask"/>): its options have no page, so no letters
+    /// in view, and sitting nearer has no field.
+    /// </summary>
+    public bool DistancePlan => Enum.TryParse<ReadingTask>(Input.Task, out var task) && Ranking.IsDistanceTask(task);
 
     public void OnGet()
     {
