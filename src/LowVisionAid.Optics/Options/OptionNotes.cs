@@ -116,6 +116,16 @@ public static class OptionNotes
     /// </summary>
     public const string FocusingFromFarSetting = "Focusing from its far setting";
 
+    /// <summary>
+    /// True for an option planned for distance viewing (a distance telescope, or sitting nearer the television): it has
+    /// no page, so letters of print in view are not counted.
+    /// </summary>
+    public static bool ForDistanceViewing(MagnifierOption option)
+    {
+        ArgumentNullException.ThrowIfNull(option);
+        return Ranking.IsDistanceKind(option.Kind) || option is MovingCloserOption { DistanceTask: true };
+    }
+
     /// <summary>The label of an option's linear field: on the page, or at the viewing distance for a distance telescope.</summary>
     public static string FieldLabel(OptionKind kind) => Ranking.IsDistanceKind(kind) ? FieldAtViewingDistance : FieldOnPage;
 

@@ -285,6 +285,13 @@ public static class PlanText
         return figures;
     }
 
+    /// <summary>
+    /// The comparison table's letters in view: the count, "Not limited" when no lens limits the page, or "Not counted
+    /// (distance)" for an option planned for distance viewing, which has no page.
+    /// </summary>
+    public static string LettersInBrief(MagnifierOption option) =>
+        LettersInView(option) ?? (OptionNotes.ForDistanceViewing(option) ? "Not counted (distance)" : "Not limited");
+
     /// <summary>Whole letters of the target print in view (the core's rounding), or null when no lens limits them.</summary>
     public static string? LettersInView(MagnifierOption option)
     {

@@ -63,6 +63,8 @@ public class PlanTextTests
         Assert.Equal("+13.53 D", Assert.Single(figures, f => f.Label == "Focusing from its far setting").Value);
         Assert.Single(figures, f => f.Label == "Field at the viewing distance");
         Assert.DoesNotContain(figures, f => f.Label is "Field on the page" or "Letters in view" or "Focusing or add needed");
+        Assert.Equal("Not counted (distance)", PlanText.LettersInBrief(telescope));
+        Assert.Equal("Not counted (distance)", PlanText.LettersInBrief(plan.Options.Select(r => r.Option).OfType<MovingCloserOption>().Single()));
         var hand = Planner.Build(new PlanRequest
         {
             TargetPrint = PrintSize.FromM(1),
@@ -73,5 +75,6 @@ public class PlanTextTests
         var near = PlanText.Figures(hand, imperial: false).Select(f => f.Label).ToList();
         Assert.Contains("Field on the page", near);
         Assert.Contains("Focusing or add needed", near);
+        Assert.Matches("^[0-9]+$", PlanText.LettersInBrief(hand));
     }
 }
