@@ -32,7 +32,7 @@ public sealed class CalculatorTests(BrowserSession browser, AppServer app) : Bro
         var near = calculator.Estimate("Near-acuity method");
         await Assertions.Expect(near).ToContainTextAsync("15.63 D");
         await Assertions.Expect(near).ToContainTextAsync("6.4 cm");
-        await Assertions.Expect(calculator.Plan).ToContainTextAsync("The options are worked out for 15.63 D");
+        await Assertions.Expect(calculator.Plan).ToContainTextAsync("The options are worked out for +15.63 D");
         Assert.NotEmpty(await calculator.OptionHeadingsAsync());
         await Assertions.Expect(calculator.Plan.GetByText("A magnifying lens left in sunlight can focus it and start a fire", new() { Exact = false })).ToBeVisibleAsync();
         await Artifacts.ScreenshotAsync(Page, "calculator-bailey-example");

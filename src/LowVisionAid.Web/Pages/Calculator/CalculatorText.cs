@@ -85,9 +85,12 @@ public static class CalculatorText
     /// <summary>A magnification, one decimal and "×".</summary>
     public static string Times(double value, IFormatProvider provider) => value.ToString("0.0", provider) + "×";
 
-    /// <summary>The optics core's one dioptre label (arithmetic noise below the shown digits is dropped before rounding).</summary>
+    /// <summary>
+    /// The optics core's one dioptre label, signed as the plan page and the trade write powers ("+20.00 D"); arithmetic
+    /// noise below the shown digits is dropped before rounding.
+    /// </summary>
     public static string Dioptres(double value, IFormatProvider provider) =>
-        Power.FromDioptres(Math.Abs(value) < 0.005 ? 0 : value).ToString("0.00", provider);
+        Power.FromDioptres(Math.Abs(value) < 0.005 ? 0 : value).ToString(null, provider);
 
     /// <summary>A length in centimetres, or millimetres below 1 cm.</summary>
     public static string Centimetres(double value, IFormatProvider provider) => value < 1
@@ -158,10 +161,10 @@ public static class CalculatorText
         Times(times, provider) + (needed is { } n ? " (" + Times(n, provider) + " needed)" : "");
 
     public static string BasisEstimate(PowerMethod method, double dioptres, IFormatProvider provider) =>
-        string.Create(provider, $"The options are worked out for {dioptres:0.00} D, from the {PlanText.Method(method)} estimate.");
+        $"The options are worked out for {Dioptres(dioptres, provider)}, from the {PlanText.Method(method)} estimate.";
 
     public static string BasisDistanceTask(double dioptres, IFormatProvider provider) =>
-        string.Create(provider, $"The options are worked out for {dioptres:0.00} D, from the ratio of the present acuity to the acuity wanted, at the viewing distance.");
+        $"The options are worked out for {Dioptres(dioptres, provider)}, from the ratio of the present acuity to the acuity wanted, at the viewing distance.";
 }
 
 /// <summary>One radio choice: the value posted and its label.</summary>

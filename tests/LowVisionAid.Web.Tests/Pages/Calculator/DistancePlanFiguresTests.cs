@@ -36,7 +36,7 @@ public sealed class DistancePlanFiguresTests
         var cards = page.QuerySelectorAll("ol.options > li").ToList();
         var telescope = Assert.Single(cards, c => Heading(c).EndsWith("Hand-held distance telescope", StringComparison.Ordinal));
         Assert.Contains("focus it for 3 m (+13.53 D from its far setting)", telescope.TextContent, StringComparison.Ordinal);
-        Assert.Equal("13.53 D", Figure(telescope, "Focusing from its far setting"));
+        Assert.Equal("+13.53 D", Figure(telescope, "Focusing from its far setting"));
         Assert.NotNull(Figure(telescope, "Field at the viewing distance"));
         var nearer = Assert.Single(cards, c => Heading(c).EndsWith("Moving closer", StringComparison.Ordinal));
         Assert.Contains("Sit at 60 cm instead of 3 m", nearer.TextContent, StringComparison.Ordinal);
