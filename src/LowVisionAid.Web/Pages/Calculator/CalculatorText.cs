@@ -135,7 +135,6 @@ public static class CalculatorText
     public static string Zoom(double percent, double? pixels, IFormatProvider provider) =>
         $"{percent.ToString("0", provider)} % (text about {(pixels ?? 0).ToString("0", provider)} px)";
 
-    /// <summary>The power an option gives against the power needed.</summary>
     /// <summary>The label of an option's field, as the plan page words it (<see cref="OptionNotes.FieldLabel"/>).</summary>
     public static string FieldLabel(OptionView option)
     {
@@ -150,6 +149,7 @@ public static class CalculatorText
         return OptionNotes.FocusingLabel(Enum.Parse<OptionKind>(option.Kind));
     }
 
+    /// <summary>The power an option gives against the power needed.</summary>
     public static string PowerGiven(OptionView option, IFormatProvider provider)
     {
         ArgumentNullException.ThrowIfNull(option);
